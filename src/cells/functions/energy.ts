@@ -1,0 +1,75 @@
+import { allDayEfficiency, energyDelivered, energyLost, loadFactor, lossFactor, lossFactorEstimate } from '../../core/energy';
+import { each, num, series } from '../declaration';
+
+const GROUP = 'All-day energy';
+const kva = num('kva', 'kVA', 'Nameplate rating.', 1000);
+const p0 = num('p0_w', 'W', 'No-load (core) loss.', 1400);
+const pk = num('pk_w', 'W', 'Load loss at rated current.', 10500);
+const loads = series('loads', 'per unit', 'Loading profile: one per-unit load (kVA / nameplate kVA) per step, e.g. 8,760 hourly values.', [
+  0.3, 0.35, 0.6, 0.9, 1.0, 0.7,
+]);
+const pfs = series('pfs', 'power factor', 'Power factor: one value for the whole profile or one per step.', [0.9], { default: 1 });
+const hours = series('hours', 'h', 'Length of each step: one value for every step or one per step.', [4], { default: 1 });
+
+export const ALLDAY = each({
+  name: 'ALLDAY',
+  group: GROUP,
+  help: 'All-day (energy) efficiency over a loading profile: kWh out / (kWh out + kWh lost).',
+  source: 'all-day efficiency (textbook standard)',
+  args: [kva, p0, pk, loads, pfs, hours],
+  result: { type: 'number', unit: 'fraction' },
+  compute: allDayEfficiency,
+});
+
+export const ELOSS = each({
+  name: 'ELOSS',
+  group: GROUP,
+  help: 'Energy lost in the unit over a loading profile: Σ (p0_w + pk_w × load²) × hours / 1000.',
+  source: 'common practice',
+  args: [p0, pk, loads, hours],
+  result: { type: 'number', unit: 'kWh' },
+  compute: energyLost,
+});
+
+export const EOUT = each({
+  name: 'EOUT',
+  group: GROUP,
+  help: 'Energy delivered over a loading profile: Σ load × kva × pf × hours.',
+  source: 'common practice',
+  args: [kva, loads, pfs, hours],
+  result: { type: 'number', unit: 'kWh' },
+  compute: energyDelivered,
+});
+
+export const LOADFACTOR = each({
+  name: 'LOADFACTOR',
+  group: GROUP,
+  help: 'Load factor of a profile of equal steps: mean load / peak load.',
+  source: 'common practice',
+  args: [loads],
+  result: { type: 'number', unit: 'fraction' },
+  compute: loadFactor,
+});
+
+export const LOSSFACTOR = each({
+  name: 'LOSSFACTOR',
+  group: GROUP,
+  help: 'Loss factor of a profile of equal steps, exact: mean of load² / peak load².',
+  source: 'common practice',
+  args: [loads],
+  result: { type: 'number', unit: 'fraction' },
+  compute: lossFactor,
+});
+
+export const LSF = each({
+  name: 'LSF',
+  group: GROUP,
+  help: 'Loss factor estimated from the load factor: k × LF + (1 − k) × LF²; k about 0.3, lower (0.15–0.2) for peaky loads.',
+  source: 'empirical loss-factor relation (common practice; usually credited to Buller and Woodrow, from memory)',
+  args: [
+    num('load_factor', 'fraction', 'Load factor, 0 to 1.', 0.6),
+    num('k', 'fraction', 'Weighting, 0 to 1.', 0.3, { default: 0.3 }),
+  ],
+  result: { type: 'number', unit: 'fraction' },
+  compute: lossFactorEstimate,
+});

@@ -1,0 +1,113 @@
+/**
+ * Domain checks shared by every core function. Each returns the value it checked so a body can
+ * read `const s = positive('kva', kva)`. The messages form one catalogue, so the same fault reads
+ * the same way in every function.
+ */
+import { InputError, shown } from './errors';
+
+function finite(name: string, value: number): number {
+  if (typeof value !== 'number' || !Number.isFinite(value)) {
+    throw new InputError(name, `must be a finite number (got ${shown(Number(value))})`);
+  }
+  return value;
+}
+
+export function anyNumber(name: string, value: number): number {
+  return finite(name, value);
+}
+
+export function positive(name: string, value: number): number {
+  if (!(finite(name, value) > 0)) throw new InputError(name, `must be greater than 0 (got ${shown(value)})`);
+  return value;
+}
+
+export function nonNegative(name: string, value: number): number {
+  if (!(finite(name, value) >= 0)) throw new InputError(name, `must be 0 or more (got ${shown(value)})`);
+  return value;
+}
+
+/** A fraction from 0 to 1 inclusive (load factor, loss factor, a weighting). */
+export function atMostOne(name: string, value: number): number {
+  finite(name, value);
+  if (!(value >= 0 && value <= 1)) throw new InputError(name, `must be from 0 to 1 (got ${shown(value)})`);
+  return value;
+}
+
+/** A per-unit load: 0 (no load) upward; overloads above 1 are legitimate. */
+export function perUnitLoad(name: string, value: number): number {
+  return nonNegative(name, value);
+}
+
+/** Power factor, 0 exclusive to 1 inclusive (a zero power factor delivers no energy to rate). */
+export function powerFactor(name: string, value: number): number {
+  finite(name, value);
+  if (!(value > 0 && value <= 1)) {
+    throw new InputError(name, `power factor must be above 0 and at most 1 (got ${shown(value)})`);
+  }
+  return value;
+}
+
+/**
+ * A per-unit impedance typed as an Excel percentage (5.75 % arrives as 0.0575). A value of 1 or
+ * more is almost always a percentage typed without the % sign, so the message says how to fix it.
+ */
+export function perUnitImpedance(name: string, value: number): number {
+  finite(name, value);
+  if (value >= 1) {
+    throw new InputError(name, `${shown(value)} is 100 % or more; type it as a percentage, e.g. ${shown(value)}% or ${shown(value / 100)}`);
+  }
+  if (!(value > 0)) throw new InputError(name, `must be greater than 0 % (got ${shown(value)})`);
+  return value;
+}
+
+/** A fraction strictly below 1 (percent resistance, tap step size, tolerance...). */
+export function fractionBelowOne(name: string, value: number, allowZero = true): number {
+  finite(name, value);
+  if (Math.abs(value) >= 1) {
+    throw new InputError(name, `${shown(value)} is 100 % or more; type it as a percentage, e.g. ${shown(value)}%`);
+  }
+  if (allowZero ? value < 0 : value <= 0) {
+    throw new InputError(name, `must be ${allowZero ? '0 or more' : 'greater than 0'} (got ${shown(value)})`);
+  }
+  return value;
+}
+
+export function integerBetween(name: string, value: number, low: number, high: number): number {
+  finite(name, value);
+  if (!Number.isInteger(value) || value < low || value > high) {
+    throw new InputError(name, `must be a whole number from ${low} to ${high} (got ${shown(value)})`);
+  }
+  return value;
+}
+
+export function phaseCount(name: string, value: number): 1 | 3 {
+  finite(name, value);
+  if (value !== 1 && value !== 3) throw new InputError(name, `must be 1 or 3 phases (got ${shown(value)})`);
+  return value;
+}
+
+/** Every step of a series checked with the same rule; a refusal names the step (1-based). */
+export function eachOf(name: string, values: Float64Array, check: (n: string, v: number) => number): Float64Array {
+  for (let i = 0; i < values.length; i++) {
+    try {
+      check(name, values[i]!);
+    } catch (error) {
+      if (error instanceof InputError) throw new InputError(`${name} (step ${i + 1})`, error.reason);
+      throw error;
+    }
+  }
+  return values;
+}
+
+/** A series given as one value (held constant) or as one value per step of the profile. */
+export function oneOrSameLength(name: string, values: Float64Array, steps: number, profileName: string): Float64Array {
+  if (values.length !== 1 && values.length !== steps) {
+    throw new InputError(name, `has ${values.length} values; give one value or one per step of ${profileName} (${steps})`);
+  }
+  return values;
+}
+
+export function nonEmpty(name: string, values: Float64Array): Float64Array {
+  if (values.length === 0) throw new InputError(name, 'is empty; give at least one value');
+  return values;
+}
