@@ -1,0 +1,145 @@
+import { describe, expect, it } from 'vitest';
+import { adapt, CellError, plainErrors } from '../../src/cells/adapter';
+import { catalog, findFunction } from '../../src/cells/catalog';
+import { efficiencyAt } from '../../src/core/efficiency';
+
+const cell = (name: string) => adapt(findFunction(name)!, plainErrors);
+const EFF = cell('EFF');
+
+function asError(v: unknown): CellError {
+  expect(v).toBeInstanceOf(CellError);
+  return v as CellError;
+}
+
+describe('broadcasting', () => {
+  it('a single cell gives a 1×1 result', () => {
+    expect(EFF(1000, 1400, 10500, 0.5, 1)).toEqual([[efficiencyAt(1000, 1400, 10500, 0.5, 1)]]);
+  });
+  it('a column broadcasts against single cells', () => {
+    const out = EFF([[500], [1000], [1500]], 1400, 10500, 0.5, null);
+    expect(out).toHaveLength(3);
+    expect(out[1]![0]).toBeCloseTo(efficiencyAt(1000, 1400, 10500, 0.5, 1), 15);
+  });
+  it('a column against a row gives the whole table', () => {
+    const out = EFF([[500], [1000]], 1400, 10500, [[0.25, 0.5, 1]], 1);
+    expect(out).toHaveLength(2);
+    expect(out[0]).toHaveLength(3);
+    expect(out[1]![2]).toBeCloseTo(efficiencyAt(1000, 1400, 10500, 1, 1), 15);
+  });
+  it('n×m with n×1 and 1×m', () => {
+    const loads = [
+      [0.25, 0.5],
+      [0.75, 1],
+    ];
+    const out = EFF([[500], [1000]], [[1400, 1000]], 10500, loads, 1);
+    expect(out[1]![1]).toBeCloseTo(efficiencyAt(1000, 1000, 10500, 1, 1), 15);
+    expect(out[0]![1]).toBeCloseTo(efficiencyAt(500, 1000, 10500, 0.5, 1), 15);
+  });
+  it('shapes that do not fit name both arguments', () => {
+    const out = EFF([[1], [2], [3], [4], [5]], 1400, 10500, [[1], [2], [3], [4], [5], [6], [7]], 1);
+    expect(out).toHaveLength(1);
+    expect(asError(out[0]![0]).message).toBe('argument kva is 5 rows, load is 7 rows; give ranges of the same height or a single cell');
+  });
+  it('a 1-D array is read as a row and a bare value as one cell', () => {
+    expect(EFF(1000, 1400, 10500, [0.5, 1], 1)[0]).toHaveLength(2);
+  });
+  it('10,000 rows in one call give 10,000 results', () => {
+    const kva = Array.from({ length: 10_000 }, (_, i) => [500 + (i % 20) * 100]);
+    const out = EFF(kva, 1400, 10500, 0.5, 1);
+    expect(out).toHaveLength(10_000);
+    expect(out.every((row) => typeof row[0] === 'number')).toBe(true);
+  });
+});
+
+describe('blanks, text and bad numbers', () => {
+  it('a blank optional argument takes its default', () => {
+    expect(EFF(1000, 1400, 10500, 0.5, null)).toEqual(EFF(1000, 1400, 10500, 0.5, 1));
+    expect(EFF(1000, 1400, 10500, 0.5, '')).toEqual(EFF(1000, 1400, 10500, 0.5, 1));
+    expect(EFF(1000, 1400, 10500, 0.5)).toEqual(EFF(1000, 1400, 10500, 0.5, 1));
+  });
+  it('a blank required argument is #VALUE! naming it', () => {
+    const e = asError(EFF(null, 1400, 10500, 0.5, 1)[0]![0]);
+    expect(e.code).toBe('#VALUE!');
+    expect(e.message).toBe('argument kva: is blank; a value is required');
+  });
+  it('text where a number is needed is #VALUE! in its own cell only', () => {
+    const out = EFF([[1000], ['n/a'], [750]], 1400, 10500, 0.5, 1);
+    expect(typeof out[0]![0]).toBe('number');
+    expect(asError(out[1]![0]).message).toBe('argument kva: "n/a" is text; a number is needed (kVA)');
+    expect(typeof out[2]![0]).toBe('number');
+  });
+  it('an out-of-domain number is #VALUE! with the reason', () => {
+    expect(asError(EFF(-5, 1400, 10500, 0.5, 1)[0]![0]).message).toBe('argument kva: must be greater than 0 (got -5)');
+    expect(asError(EFF(1000, 1400, 10500, 0.5, 1.2)[0]![0]).message).toMatch(/^argument pf: power factor/);
+  });
+  it('an impedance typed as 5.75 is refused with the % hint', () => {
+    const e = asError(cell('ISC')(1000, 480, 5.75, null, 3)[0]![0]);
+    expect(e.code).toBe('#VALUE!');
+    expect(e.message).toContain('5.75%');
+  });
+  it('NaN and infinity in a cell are refused, never passed on', () => {
+    expect(asError(EFF(Number.NaN, 1400, 10500, 0.5, 1)[0]![0]).message).toMatch(/kva: must be a finite number/);
+    expect(asError(EFF(1000, Infinity, 10500, 0.5, 1)[0]![0]).message).toMatch(/p0_w/);
+  });
+  it('valid inputs without an answer give #NUM!', () => {
+    expect(asError(EFF(1000, 0, 10500, 0, 1)[0]![0]).code).toBe('#NUM!');
+  });
+  it('logical values are refused for numbers and read for TRUE/FALSE arguments', () => {
+    expect(asError(EFF(true, 1400, 10500, 0.5, 1)[0]![0]).message).toMatch(/TRUE is a logical value/);
+  });
+  it('text options are case-insensitive', () => {
+    expect(cell('RATIO')(13200, 480, 'dyn11')).toEqual(cell('RATIO')(13200, 480, 'Dyn11'));
+    expect(cell('LOSSTEMP')(10000, 25, 85, null, 'AL', 'iec')[0]![0]).toBeCloseTo((225 + 85) / (225 + 25) * 10000, 9);
+  });
+  it('a non-rectangular range is refused', () => {
+    expect(asError(EFF([[1], [2, 3]], 1400, 10500, 0.5, 1)[0]![0]).message).toMatch(/rectangular/);
+  });
+});
+
+describe('series arguments', () => {
+  const ALLDAY = cell('ALLDAY');
+  it('are taken whole while the unit data broadcast', () => {
+    const out = ALLDAY([[500], [1000]], 1400, 10500, [[0.3], [0.6], [0.9]], null, null);
+    expect(out).toHaveLength(2);
+    expect(typeof out[1]![0]).toBe('number');
+  });
+  it('drop trailing blanks of a range drawn longer than the data', () => {
+    expect(ALLDAY(1000, 1400, 10500, [[0.3], [0.6], [null], ['']], null, null)).toEqual(ALLDAY(1000, 1400, 10500, [[0.3], [0.6]], null, null));
+  });
+  it('refuse a blank or text inside, naming the position', () => {
+    const e = asError(ALLDAY(1000, 1400, 10500, [[0.3], [null], [0.6]], null, null)[0]![0]);
+    expect(e.message).toBe('argument loads: value 2 is blank; every value of the series must be a number (per unit)');
+  });
+  it('refuse a per-step series of the wrong length', () => {
+    const e = asError(ALLDAY(1000, 1400, 10500, [[0.3], [0.6]], null, [[1], [1], [1]])[0]![0]);
+    expect(e.message).toMatch(/^argument hours: has 3 values/);
+  });
+});
+
+describe('block results', () => {
+  it('EFFCURVE spills points × 3', () => {
+    const out = cell('EFFCURVE')(1000, 1400, 10500, null, 5, 1);
+    expect(out).toHaveLength(5);
+    expect(out[0]).toHaveLength(3);
+  });
+  it('refuse a range where a single value is needed', () => {
+    expect(asError(cell('EFFCURVE')([[1000], [500]], 1400, 10500, null, 5, 1)[0]![0]).message).toMatch(/single value/);
+  });
+});
+
+describe('every declaration', () => {
+  it.each(catalog.map((d) => [d.name, d] as const))('%s computes its own sample without error', (_name, decl) => {
+    const args = decl.args.map((a) => (Array.isArray(a.sample) ? a.sample.map((v) => [v]) : a.sample));
+    const out = adapt(decl, plainErrors)(...args);
+    for (const row of out) for (const v of row) expect(v).not.toBeInstanceOf(CellError);
+  });
+  it('names are unique upper-case and optional arguments come last', () => {
+    const names = catalog.map((d) => d.name);
+    expect(new Set(names).size).toBe(names.length);
+    for (const d of catalog) {
+      expect(d.name).toMatch(/^[A-Z][A-Z0-9]*$/);
+      const firstOptional = d.args.findIndex((a) => a.optional);
+      if (firstOptional >= 0) expect(d.args.slice(firstOptional).every((a) => a.optional)).toBe(true);
+    }
+  });
+});
