@@ -1,5 +1,5 @@
 /**
- * Every cell function, in the order the docs list them. Adding a function is adding its
+ * Every cell function, grouped as the docs list them. Adding a function is adding its
  * declaration to a group file and that file to this list.
  */
 import type { CellFunctionDecl } from './declaration';
@@ -11,7 +11,11 @@ import * as ratio from './functions/ratio';
 
 const groups: Record<string, CellFunctionDecl>[] = [ratio, current, losses, efficiency, energy];
 
-export const catalog: readonly CellFunctionDecl[] = groups.flatMap((g) => Object.values(g));
+// Alphabetical within each group: module namespaces enumerate in different orders under different
+// loaders, and the generated files must not change with the loader.
+export const catalog: readonly CellFunctionDecl[] = groups.flatMap((g) =>
+  Object.values(g).sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0)),
+);
 
 export const NAMESPACE = 'XFMR';
 
