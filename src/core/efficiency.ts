@@ -20,13 +20,18 @@ export function efficiencyAt(kva: number, p0Watts: number, pkWatts: number, load
 export function maxEfficiencyLoad(p0Watts: number, pkWatts: number): number {
   const p0 = nonNegative('p0_w', p0Watts);
   const pk = positive('pk_w', pkWatts);
-  return Math.sqrt(p0 / pk);
+  const x = Math.sqrt(p0 / pk);
+  if (!Number.isFinite(x)) throw new NoAnswerError('load loss is too small against no-load loss for the peak to lie at any finite load');
+  return x;
 }
 
+/** The peak efficiency, at x = √(P0/Pk): there the losses are 2·P0, so η = x·S·pf / (x·S·pf + 2·P0). */
 export function maxEfficiency(kva: number, p0Watts: number, pkWatts: number, pf: number): number {
+  const s = positive('kva', kva);
   const x = maxEfficiencyLoad(p0Watts, pkWatts);
+  const out = x * s * 1000 * powerFactor('pf', pf);
   if (x === 0) return 1; // no core loss at all: efficiency approaches 1 as load falls to 0
-  return efficiencyAt(kva, p0Watts, pkWatts, x, pf);
+  return out / (out + 2 * p0Watts);
 }
 
 /** Rows of load | efficiency | total losses (W) from 0 to maxLoad in `points` equal steps. */
