@@ -143,8 +143,10 @@ function refusal(error: unknown, makeError: ErrorFactory): unknown {
   throw error; // a programmer mistake: let the tests see it
 }
 
+const NOT_FINITE = 'the result is not a finite number';
+
 function resultCell(value: Scalar, makeError: ErrorFactory): unknown {
-  if (typeof value === 'number' && !Number.isFinite(value)) return makeError('NUM', 'the result is not a finite number');
+  if (typeof value === 'number' && !Number.isFinite(value)) return makeError('NUM', NOT_FINITE);
   return value;
 }
 
@@ -161,14 +163,44 @@ export function adapt(decl: CellFunctionDecl, makeError: ErrorFactory): CellFunc
   };
 }
 
+/** Calls compute with the buffer's values without spreading an array on every element. */
+function caller(compute: (...a: any[]) => Scalar, n: number): (b: unknown[]) => Scalar {
+  switch (n) {
+    case 1:
+      return (b) => compute(b[0]);
+    case 2:
+      return (b) => compute(b[0], b[1]);
+    case 3:
+      return (b) => compute(b[0], b[1], b[2]);
+    case 4:
+      return (b) => compute(b[0], b[1], b[2], b[3]);
+    case 5:
+      return (b) => compute(b[0], b[1], b[2], b[3], b[4]);
+    case 6:
+      return (b) => compute(b[0], b[1], b[2], b[3], b[4], b[5]);
+    default:
+      return (b) => compute(...b);
+  }
+}
+
+interface Varying {
+  readonly k: number;
+  readonly values: unknown[];
+  readonly faults: (string | undefined)[] | null;
+  readonly rowStep: number;
+  readonly colStep: number;
+}
+
 function runEach(compute: (...a: any[]) => Scalar, decls: readonly ArgDecl[], raw: unknown[], makeError: ErrorFactory): unknown[][] {
   const n = decls.length;
   const buf = new Array<unknown>(n);
-  const broadcast: { k: number; c: Coerced; rowStep: number; colStep: number }[] = [];
+  const varying: Varying[] = [];
   let rows = 1;
   let cols = 1;
   let rowsFrom = '';
   let colsFrom = '';
+  // A single-cell argument's fault spoils every element alike; the first one found is reported.
+  let constantFault: string | undefined;
   for (let k = 0; k < n; k++) {
     const d = decls[k]!;
     if (d.series) {
@@ -186,33 +218,39 @@ function runEach(compute: (...a: any[]) => Scalar, decls: readonly ArgDecl[], ra
       cols = c.cols;
       colsFrom = d.name;
     }
-    broadcast.push({ k, c, rowStep: c.rows === 1 ? 0 : c.cols, colStep: c.cols === 1 ? 0 : 1 });
+    if (c.rows === 1 && c.cols === 1) {
+      // Held once in the buffer for every element, not re-read per element.
+      buf[k] = c.values[0];
+      if (c.faults !== null && constantFault === undefined) constantFault = c.faults[0];
+    } else {
+      varying.push({ k, values: c.values, faults: c.faults, rowStep: c.rows === 1 ? 0 : c.cols, colStep: c.cols === 1 ? 0 : 1 });
+    }
   }
+  const call = caller(compute, n);
+  const v = varying.length;
+  const element = (i: number, j: number): unknown => {
+    for (let q = 0; q < v; q++) {
+      const a = varying[q]!;
+      const idx = i * a.rowStep + j * a.colStep;
+      if (a.faults !== null && a.faults[idx] !== undefined) return makeError('VALUE', a.faults[idx]!);
+      buf[a.k] = a.values[idx];
+    }
+    if (constantFault !== undefined) return makeError('VALUE', constantFault);
+    try {
+      const r = call(buf);
+      return typeof r === 'number' && !Number.isFinite(r) ? makeError('NUM', NOT_FINITE) : r;
+    } catch (error) {
+      return refusal(error, makeError);
+    }
+  };
   const out = new Array<unknown[]>(rows);
-  const b = broadcast.length;
+  if (cols === 1) {
+    for (let i = 0; i < rows; i++) out[i] = [element(i, 0)];
+    return out;
+  }
   for (let i = 0; i < rows; i++) {
     const row = new Array<unknown>(cols);
-    for (let j = 0; j < cols; j++) {
-      let fault: string | undefined;
-      for (let q = 0; q < b; q++) {
-        const a = broadcast[q]!;
-        const idx = i * a.rowStep + j * a.colStep;
-        if (a.c.faults !== null && a.c.faults[idx] !== undefined) {
-          fault = a.c.faults[idx];
-          break;
-        }
-        buf[a.k] = a.c.values[idx];
-      }
-      if (fault !== undefined) {
-        row[j] = makeError('VALUE', fault);
-        continue;
-      }
-      try {
-        row[j] = resultCell(compute(...buf), makeError);
-      } catch (error) {
-        row[j] = refusal(error, makeError);
-      }
-    }
+    for (let j = 0; j < cols; j++) row[j] = element(i, j);
     out[i] = row;
   }
   return out;
