@@ -183,12 +183,14 @@ function caller(compute: (...a: any[]) => Scalar, n: number): (b: unknown[]) => 
   }
 }
 
+/** A ranged argument, read straight from its cells in the element loop (no copy of the range). */
 interface Varying {
   readonly k: number;
-  readonly values: unknown[];
-  readonly faults: (string | undefined)[] | null;
-  readonly rowStep: number;
-  readonly colStep: number;
+  readonly decl: ArgDecl;
+  readonly cells: unknown[][];
+  readonly numeric: boolean;
+  readonly rowSel: number;
+  readonly colSel: number;
 }
 
 function runEach(compute: (...a: any[]) => Scalar, decls: readonly ArgDecl[], raw: unknown[], makeError: ErrorFactory): unknown[][] {
@@ -207,38 +209,47 @@ function runEach(compute: (...a: any[]) => Scalar, decls: readonly ArgDecl[], ra
       buf[k] = coerceSeries(d, raw[k]);
       continue;
     }
-    const c = coerceBroadcast(d, raw[k]);
-    if (c.rows !== 1) {
-      if (rows !== 1 && c.rows !== rows) throw new WholeArgumentError(`argument ${rowsFrom} is ${rows} rows, ${d.name} is ${c.rows} rows; give ranges of the same height or a single cell`);
-      rows = c.rows;
+    const m = asMatrix(d.name, raw[k]);
+    const r = m.length;
+    const c = m[0]!.length;
+    if (r !== 1) {
+      if (rows !== 1 && r !== rows) throw new WholeArgumentError(`argument ${rowsFrom} is ${rows} rows, ${d.name} is ${r} rows; give ranges of the same height or a single cell`);
+      rows = r;
       rowsFrom = d.name;
     }
-    if (c.cols !== 1) {
-      if (cols !== 1 && c.cols !== cols) throw new WholeArgumentError(`argument ${colsFrom} is ${cols} columns, ${d.name} is ${c.cols} columns; give ranges of the same width or a single cell`);
-      cols = c.cols;
+    if (c !== 1) {
+      if (cols !== 1 && c !== cols) throw new WholeArgumentError(`argument ${colsFrom} is ${cols} columns, ${d.name} is ${c} columns; give ranges of the same width or a single cell`);
+      cols = c;
       colsFrom = d.name;
     }
-    if (c.rows === 1 && c.cols === 1) {
-      // Held once in the buffer for every element, not re-read per element.
-      buf[k] = c.values[0];
-      if (c.faults !== null && constantFault === undefined) constantFault = c.faults[0];
+    if (r === 1 && c === 1) {
+      // Coerced once and held in the buffer for every element.
+      const one = coerceCell(d, m[0]![0]);
+      buf[k] = one.value;
+      if (one.fault !== undefined && constantFault === undefined) constantFault = one.fault;
     } else {
-      varying.push({ k, values: c.values, faults: c.faults, rowStep: c.rows === 1 ? 0 : c.cols, colStep: c.cols === 1 ? 0 : 1 });
+      varying.push({ k, decl: d, cells: m, numeric: d.type === 'number', rowSel: r === 1 ? 0 : 1, colSel: c === 1 ? 0 : 1 });
     }
   }
   const call = caller(compute, n);
   const v = varying.length;
   const element = (i: number, j: number): unknown => {
+    if (constantFault !== undefined) return makeError('VALUE', constantFault);
     for (let q = 0; q < v; q++) {
       const a = varying[q]!;
-      const idx = i * a.rowStep + j * a.colStep;
-      if (a.faults !== null && a.faults[idx] !== undefined) return makeError('VALUE', a.faults[idx]!);
-      buf[a.k] = a.values[idx];
+      const cell = a.cells[i * a.rowSel]![j * a.colSel];
+      // The common case, a finite number for a number argument, costs one test.
+      if (a.numeric && typeof cell === 'number' && cell - cell === 0) {
+        buf[a.k] = cell;
+        continue;
+      }
+      const c = coerceCell(a.decl, cell);
+      if (c.fault !== undefined) return makeError('VALUE', c.fault);
+      buf[a.k] = c.value;
     }
-    if (constantFault !== undefined) return makeError('VALUE', constantFault);
     try {
       const r = call(buf);
-      return typeof r === 'number' && !Number.isFinite(r) ? makeError('NUM', NOT_FINITE) : r;
+      return typeof r === 'number' && r - r !== 0 ? makeError('NUM', NOT_FINITE) : r;
     } catch (error) {
       return refusal(error, makeError);
     }
