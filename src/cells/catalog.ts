@@ -1,6 +1,6 @@
 /**
- * Every cell function, in the order the docs list them. Adding a function is adding its
- * declaration to a group file and that file to this list.
+ * Every cell function, group by group in the order the docs list them, by name within a group.
+ * Adding a function is adding its declaration to a group file and that file to this list.
  */
 import type { CellFunctionDecl } from './declaration';
 import * as current from './functions/current';
@@ -11,7 +11,14 @@ import * as ratio from './functions/ratio';
 
 const groups: Record<string, CellFunctionDecl>[] = [ratio, current, losses, efficiency, energy];
 
-export const catalog: readonly CellFunctionDecl[] = groups.flatMap((g) => Object.values(g));
+// A module namespace lists its exports sorted by name (webpack and native ESM do), but vitest's
+// module runner lists them in source order: sort explicitly so functions.json, the bundle and
+// the tests all see one order.
+export const catalog: readonly CellFunctionDecl[] = groups.flatMap((g) =>
+  Object.keys(g)
+    .sort()
+    .map((k) => g[k]!),
+);
 
 export const NAMESPACE = 'XFMR';
 
