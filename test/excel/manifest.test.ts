@@ -145,8 +145,8 @@ describe('functions.json checks', () => {
 
   it('catch a parameter without dimensionality and an optional parameter before a required one', () => {
     const noDim = copy();
-    delete noDim.functions[0]!.parameters[0].dimensionality;
-    expect(failed(checkFunctionsJson(noDim))[0]!.detail).toMatch(/parameter hv_v: no dimensionality/);
+    delete noDim.functions.find((f) => f.id === 'RATIO')!.parameters[0].dimensionality;
+    expect(failed(checkFunctionsJson(noDim))[0]!.detail).toBe('RATIO parameter hv_v: no dimensionality');
     const order = copy();
     const eff = order.functions.find((f) => f.id === 'EFF')!;
     eff.parameters[0].optional = true;
