@@ -135,8 +135,8 @@ describe('functions.json checks', () => {
     dup.functions.push({ ...dup.functions[0]! });
     expect(failed(checkFunctionsJson(dup)).map((c) => c.name)).toEqual(['function ids unique']);
     const lower = copy();
-    lower.functions[0]!.id = 'ratio';
-    lower.functions[0]!.name = 'ratio';
+    lower.functions[0]!.id = 'turns.ratio';
+    lower.functions[0]!.name = 'turns.ratio';
     expect(failed(checkFunctionsJson(lower)).map((c) => c.name)).toEqual(['function ids upper-case [A-Z0-9._], starting with a letter']);
     const renamed = copy();
     renamed.functions[0]!.name = 'TURNS';
