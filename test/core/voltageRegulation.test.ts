@@ -60,7 +60,7 @@ describe('parallelShare', () => {
   });
   it('the unit with the lower impedance takes more than its share and is flagged when overloaded', () => {
     const rows = parallelShare(f(1000, 500), f(0.05, 0.06), 1500);
-    const [a, b] = rows as [number, number, boolean][];
+    const [a, b] = rows as [[number, number, boolean], [number, number, boolean]];
     expect(a[0] + b[0]).toBeCloseTo(1500, 9);
     // shares ∝ S/z: 20 000 and 8 333.3 → 1058.8 and 441.2 kVA
     expect(a[0]).toBeCloseTo((1500 * 20000) / (20000 + 500 / 0.06), 9);
