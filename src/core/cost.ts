@@ -32,7 +32,8 @@ export function presentWorthFactor(rate: number, years: number): number {
   const i = fractionBelowOne('rate', rate);
   const n = integerBetween('years', years, 1, MAX_YEARS);
   if (i === 0) return n;
-  return (1 - Math.pow(1 + i, -n)) / i;
+  // 1 − (1 + i)^−n written with expm1/log1p so that a very small rate keeps its precision.
+  return -Math.expm1(-n * Math.log1p(i)) / i;
 }
 
 /** Present worth of the energy one watt loses over the period: price × hours/1000 × PW. */

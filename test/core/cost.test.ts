@@ -10,6 +10,9 @@ describe('presentWorthFactor', () => {
     expect(presentWorthFactor(0.08, 1)).toBeCloseTo(1 / 1.08, 12);
     expect(presentWorthFactor(0.08, 30)).toBeLessThan(30);
   });
+  it('tends smoothly to the number of years as the rate falls to 0', () => {
+    expect(presentWorthFactor(1e-12, 25)).toBeCloseTo(25, 8);
+  });
   it('refuses a rate typed as a whole percentage, with the hint', () => {
     expect(() => presentWorthFactor(6, 25)).toThrow(/type it as a percentage/);
   });
