@@ -3,13 +3,32 @@
  * declaration to a group file and that file to this list.
  */
 import type { CellFunctionDecl } from './declaration';
+import * as compliance from './functions/compliance';
+import * as cost from './functions/cost';
 import * as current from './functions/current';
 import * as efficiency from './functions/efficiency';
 import * as energy from './functions/energy';
+import * as harmonics from './functions/harmonics';
 import * as losses from './functions/losses';
 import * as ratio from './functions/ratio';
+import * as regulation from './functions/regulation';
+import * as rules from './functions/rules';
+import * as sizing from './functions/sizing';
 
-const groups: Record<string, CellFunctionDecl>[] = [ratio, current, losses, efficiency, energy];
+// COMPLIES (compliance) stays last: it checks a unit against the rules listed just before it.
+const groups: Record<string, CellFunctionDecl>[] = [
+  ratio,
+  current,
+  sizing,
+  losses,
+  harmonics,
+  efficiency,
+  energy,
+  cost,
+  regulation,
+  rules,
+  compliance,
+];
 
 // Alphabetical within each group: module namespaces enumerate in different orders under different
 // loaders, and the generated files must not change with the loader.

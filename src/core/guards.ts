@@ -111,3 +111,25 @@ export function nonEmpty(name: string, values: Float64Array): Float64Array {
   if (values.length === 0) throw new InputError(name, 'is empty; give at least one value');
   return values;
 }
+
+/** A positive number no larger than `max` (hours in a year, a plausible ceiling on a count...). */
+export function positiveAtMost(name: string, value: number, max: number): number {
+  finite(name, value);
+  if (!(value > 0 && value <= max)) {
+    throw new InputError(name, `must be greater than 0 and at most ${shown(max)} (got ${shown(value)})`);
+  }
+  return value;
+}
+
+/**
+ * One of a fixed set of text options, matched case-insensitively and ignoring surrounding blanks.
+ * Returns the option as the set spells it, so callers compare against one spelling only.
+ */
+export function oneOf<T extends string>(name: string, text: string, options: readonly T[]): T {
+  const t = String(text).trim().toLowerCase();
+  const hit = options.find((o) => o.toLowerCase() === t);
+  if (hit === undefined) {
+    throw new InputError(name, `"${String(text)}" is not one of ${options.map((o) => `"${o}"`).join(', ')}`);
+  }
+  return hit;
+}

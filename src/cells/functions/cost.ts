@@ -1,0 +1,69 @@
+import { loadLossWorth, lossEnergyCost, noLoadLossWorth, totalOwningCost } from '../../core/cost';
+import { each, num, series } from '../declaration';
+
+const GROUP = 'Cost';
+const price = num('price_kwh', 'money/kWh', 'Price of a kWh of energy lost, in your currency.', 0.12);
+const rate = num('rate', 'fraction', 'Interest (discount) rate a year, e.g. 6%; 0 for no discounting. No default: it is your evaluation policy.', 0.06);
+const years = num('years', 'years', 'Evaluation period, a whole number of years from 1 to 100. No default: it is your evaluation policy.', 25);
+const hoursAYear = num('hours', 'h', 'Hours energised a year, up to 8,784.', 8760, { default: 8760 });
+const p0 = num('p0_w', 'W', 'No-load loss (test report or offer).', 1100);
+const pk = num('pk_w', 'W', 'Load loss at rated current (test report or offer).', 9000);
+
+export const AFACTOR = each({
+  name: 'AFACTOR',
+  group: GROUP,
+  help: 'A factor: present worth of one watt of no-load loss, price_kwh × hours / 1000 × (1 − (1 + rate)^−years) / rate (× years when rate is 0).',
+  source: 'present worth of a level annuity applied to loss energy (common practice; loss capitalisation as stated in manufacturers’ guidance)',
+  args: [price, rate, years, hoursAYear],
+  result: { type: 'number', unit: 'money/W' },
+  compute: noLoadLossWorth,
+});
+
+export const BFACTOR = each({
+  name: 'BFACTOR',
+  group: GROUP,
+  help: 'B factor: present worth of one watt of rated load loss, the A factor × loss_factor × peak_load².',
+  source: 'present worth of a level annuity applied to loss energy (common practice; loss capitalisation as stated in manufacturers’ guidance)',
+  args: [
+    price,
+    num('loss_factor', 'fraction', 'Loss factor of the yearly loading, 0 to 1: mean of load² over peak² (see LOSSFACTOR, LSF).', 0.35),
+    num('peak_load', 'per unit', 'Peak load of the year as a fraction of nameplate kVA.', 0.8),
+    rate,
+    years,
+    hoursAYear,
+  ],
+  result: { type: 'number', unit: 'money/W' },
+  compute: loadLossWorth,
+});
+
+export const TOC = each({
+  name: 'TOC',
+  group: GROUP,
+  help: 'Total owning cost: price + a × p0_w + b × pk_w, with a and b from AFACTOR and BFACTOR.',
+  source: 'total owning cost, TOC = price + A·P0 + B·Pk (common practice)',
+  args: [
+    num('price', 'money', 'Purchase price of the unit.', 18500),
+    p0,
+    pk,
+    num('a', 'money/W', 'Worth of a watt of no-load loss (AFACTOR).', 10.5),
+    num('b', 'money/W', 'Worth of a watt of rated load loss (BFACTOR).', 2.1),
+  ],
+  result: { type: 'number', unit: 'money' },
+  compute: totalOwningCost,
+});
+
+export const LOSSCOST = each({
+  name: 'LOSSCOST',
+  group: GROUP,
+  help: 'Cost of the energy lost over a loading profile, not discounted: Σ (p0_w + pk_w × load²) × hours / 1000 × price_kwh.',
+  source: 'common practice',
+  args: [
+    p0,
+    pk,
+    series('loads', 'per unit', 'Loading profile: one per-unit load (kVA / nameplate kVA) per step, e.g. 8,760 hourly values.', [0.3, 0.5, 0.8, 0.6]),
+    price,
+    series('hours', 'h', 'Length of each step: one value for every step or one per step.', [6], { default: 1 }),
+  ],
+  result: { type: 'number', unit: 'money' },
+  compute: lossEnergyCost,
+});

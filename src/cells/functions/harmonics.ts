@@ -1,0 +1,38 @@
+import { harmonicDerating, harmonicLossFactor, kFactor } from '../../core/harmonics';
+import { each, num, series } from '../declaration';
+
+const GROUP = 'Losses';
+const orders = series('orders', 'order', 'Harmonic orders, 1 for the fundamental, e.g. 1, 5, 7, 11, 13.', [1, 5, 7, 11, 13]);
+
+export const HLF = each({
+  name: 'HLF',
+  group: GROUP,
+  help: 'Harmonic loss factor: Σ (I_h·h)² / Σ I_h², the winding eddy loss of the spectrum per unit of that of a sine of the same rms. Currents in any one unit.',
+  source: 'IEEE C57.110 harmonic loss factor F_HL',
+  args: [orders, series('currents', 'A or per unit', 'Current at each order, one per order, in any one unit (A, % of fundamental...).', [100, 20, 14, 9.1, 7.7])],
+  result: { type: 'number', unit: 'factor' },
+  compute: harmonicLossFactor,
+});
+
+export const KFACTOR = each({
+  name: 'KFACTOR',
+  group: GROUP,
+  help: 'K-factor: Σ (I_h·h)² with each current per unit of the transformer’s rated current; a spectrum whose rms is 1 per unit gives the same value as HLF.',
+  source: 'UL 1561/1562 K-factor definition',
+  args: [orders, series('currents', 'per unit', 'Current at each order per unit of rated current, e.g. 0.96, 0.19, 0.13.', [0.96, 0.19, 0.13, 0.087, 0.074])],
+  result: { type: 'number', unit: 'factor' },
+  compute: kFactor,
+});
+
+export const HDERATE = each({
+  name: 'HDERATE',
+  group: GROUP,
+  help: 'Largest per-unit load current with that harmonic content: √((1 + eddy_pu) / (1 + hlf × eddy_pu)).',
+  source: 'IEEE C57.110 maximum non-sinusoidal current, dry-type method (from memory)',
+  args: [
+    num('hlf', 'factor', 'Harmonic loss factor of the load current (HLF), 1 or more.', 8.35),
+    num('eddy_pu', 'per unit', 'Winding eddy loss at rated current per unit of the rated I²R loss, e.g. 8%.', 0.08),
+  ],
+  result: { type: 'number', unit: 'per unit' },
+  compute: harmonicDerating,
+});
