@@ -63,8 +63,8 @@ function outsideQuotes(formula: string, edit: (code: string) => string): string 
 }
 
 // A function name: not preceded by a name character, followed by "(".
-const STORED_CALL = /(?<![\w.])_xldudf_([A-Za-z0-9_]+)(?=\s*\()/g;
-const FUTURE_PREFIX = /(?<![\w.])_xlfn\.(?:_xlws\.)?(?=[A-Za-z])/g;
+const STORED_CALL = /(?<![\w.])_xldudf_([A-Za-z0-9_]+)(?=\s*\()/gi;
+const FUTURE_PREFIX = /(?<![\w.])_xlfn\.(?:_xlws\.)?(?=[A-Za-z])/gi;
 const PLAIN_CALL = new RegExp(`(?<![\\w.])${NAMESPACE}\\.([A-Za-z0-9_.]+)(?=\\s*\\()`, 'gi');
 
 /** The formula as the engine reads it: our stored names back to XFMR.NAME, `_xlfn.` dropped. */
