@@ -3,7 +3,7 @@
  * from Excel expects. Formulas here use the engine's names (XFMR.EFF); the Excel file form
  * (_xldudf_XFMR_EFF) is translated in names.ts.
  */
-import { HyperFormula, type ConfigParams, type RawCellContent, type SimpleCellAddress } from 'hyperformula';
+import { HyperFormula, type ConfigParams, type RawCellContent, type SerializedNamedExpression, type SimpleCellAddress } from 'hyperformula';
 import { registerCatalog, withSession, type CalcSession } from './functions';
 
 /** Excel's sheet size: 1,048,576 rows × 16,384 columns (XFD). */
@@ -32,6 +32,8 @@ const RESIZE_PASSES = 4;
 export interface EngineOptions {
   /** Called once per evaluation of one of our functions. */
   readonly onCall?: () => void;
+  /** Workbook-level names (Price_kWh = Inputs!$B$2). */
+  readonly namedExpressions?: SerializedNamedExpression[];
 }
 
 const key = (a: SimpleCellAddress): string => `${a.sheet}:${a.row}:${a.col}`;
@@ -48,7 +50,7 @@ export function createEngine(sheets: Sheets, options: EngineOptions = {}): Hyper
     called: options.onCall,
   };
   return withSession(session, () => {
-    const hf = HyperFormula.buildFromSheets(sheets, ENGINE_CONFIG);
+    const hf = HyperFormula.buildFromSheets(sheets, ENGINE_CONFIG, options.namedExpressions);
     for (let pass = 0; pass < RESIZE_PASSES && pending.size > 0; pass++) {
       const again = [...pending.values()];
       pending = new Map();

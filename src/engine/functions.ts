@@ -92,10 +92,20 @@ interface PluginInternals {
   dependencyGraph: { getCell(address: SimpleCellAddress): unknown };
 }
 
+/** The formula itself under ARRAYFORMULA(…) and parentheses, which do not change a result's size. */
+function unwrapped(ast: unknown): unknown {
+  let node = ast as { type?: string; procedureName?: string; args?: unknown[]; expression?: unknown } | undefined;
+  for (;;) {
+    if (node?.type === 'PARENTHESIS') node = node.expression as typeof node;
+    else if (node?.type === 'FUNCTION_CALL' && node.procedureName === 'ARRAYFORMULA' && node.args?.length === 1) node = node.args[0] as typeof node;
+    else return node;
+  }
+}
+
 /** The room HyperFormula reserved for the formula whose root is `ast`, or undefined when nested. */
 function reservedSize(plugin: PluginInternals, ast: unknown, address: SimpleCellAddress): { rows: number; cols: number } | undefined {
   const vertex = plugin.dependencyGraph.getCell(address) as { formula?: unknown; width?: number; height?: number } | undefined;
-  if (vertex === undefined || vertex.formula !== ast) return undefined;
+  if (vertex === undefined || unwrapped(vertex.formula) !== ast) return undefined;
   return typeof vertex.width === 'number' && typeof vertex.height === 'number'
     ? { rows: vertex.height, cols: vertex.width }
     : { rows: 1, cols: 1 };

@@ -58,7 +58,7 @@ describe('the catalog in HyperFormula', () => {
         refs.push(`${col}2:${col}${values.length + 1}`);
         adapterArgs.push(values.map((v) => [v]));
       } else {
-        rows[0]![k] = typeof a.sample === 'string' ? `'${a.sample}` : a.sample;
+        rows[0]![k] = typeof a.sample === 'string' ? `'${a.sample}` : (a.sample as number | boolean);
         refs.push(`${col}1`);
         adapterArgs.push(a.sample);
       }
