@@ -2,7 +2,7 @@
 import type ExcelJS from 'exceljs';
 import { calculate, loadWorkbook, readCells, storeResults, WorkbookError, type FormulaResult } from '../engine/xlsx';
 import { checkOutput, readInput, UsageError, writeAtomically } from './files';
-import { progress, wantsBar } from './progress';
+import { progress, wantsBar, type Progress } from './progress';
 
 export interface CalcOptions {
   readonly out: string;
@@ -21,22 +21,29 @@ function checkXlsxName(path: string, what: string): void {
   if (!/\.xlsx$/i.test(path)) throw new UsageError(`${path}: the ${what} must be an .xlsx file`);
 }
 
-/** Recalculates an exceljs workbook in place, with a progress bar when it is big. */
-export function recalculateWithProgress(workbook: ExcelJS.Workbook): CalcSummary {
+/**
+ * Recalculates an exceljs workbook in place, then saves it through `save`, with a progress bar
+ * when the workbook is big (the bar stays up while the file is written, which takes as long).
+ */
+export async function recalculateAndSave(workbook: ExcelJS.Workbook, save: () => Promise<void>): Promise<CalcSummary> {
   const read = readCells(workbook);
   const ours = read.formulas.filter((f) => f.ours).length;
-  const bar = progress(wantsBar(read.formulas.length, read.longestRange));
+  const bar: Progress = progress(wantsBar(read.formulas.length, read.longestRange));
   try {
     bar.stage('calculating', ours);
     const hf = calculate(read, () => bar.tick());
+    let results: FormulaResult[];
     try {
       bar.stage('storing results', read.formulas.length);
-      const results = storeResults(workbook, read, hf, () => bar.tick());
-      const errors = results.filter((r) => r.value !== null && typeof r.value === 'object').length;
-      return { formulas: results.length, ours, errors, results };
+      results = storeResults(workbook, read, hf, () => bar.tick());
     } finally {
       hf.destroy();
     }
+    bar.stage('writing the workbook', 1);
+    await save();
+    bar.tick();
+    const errors = results.filter((r) => r.value !== null && typeof r.value === 'object').length;
+    return { formulas: results.length, ours, errors, results };
   } finally {
     bar.stop();
   }
@@ -53,7 +60,5 @@ export async function calc(input: string, options: CalcOptions): Promise<CalcSum
     if (error instanceof WorkbookError) throw new UsageError(`${input}: ${error.message}`);
     throw error;
   }
-  const summary = recalculateWithProgress(workbook);
-  await writeAtomically(options.out, (tmp) => workbook.xlsx.writeFile(tmp), { overwrite: Boolean(options.overwrite) });
-  return summary;
+  return recalculateAndSave(workbook, () => writeAtomically(options.out, (tmp) => workbook.xlsx.writeFile(tmp), { overwrite: Boolean(options.overwrite) }));
 }

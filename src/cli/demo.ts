@@ -3,7 +3,7 @@ import { promises as fs } from 'node:fs';
 import { join } from 'node:path';
 import { SAFETY_NOTE } from '../cells/metadata';
 import type { FormulaResult, JsonValue } from '../engine/xlsx';
-import { recalculateWithProgress } from './calc';
+import { recalculateAndSave } from './calc';
 import { FLEET, FLEET_COLUMNS, fleetWorkbook, YEAR_CELLS, YEAR_UNIT, yearWorkbook } from './fernhill';
 import { checkOutput, writeAtomically } from './files';
 
@@ -38,11 +38,9 @@ export async function demo(options: DemoOptions): Promise<DemoSummary> {
   for (const f of files) await checkOutput(f, { overwrite });
 
   const fleet = fleetWorkbook();
-  const fleetCalc = recalculateWithProgress(fleet);
+  const fleetCalc = await recalculateAndSave(fleet, () => writeAtomically(files[0]!, (tmp) => fleet.xlsx.writeFile(tmp), { overwrite }));
   const year = yearWorkbook();
-  const yearCalc = recalculateWithProgress(year);
-  await writeAtomically(files[0]!, (tmp) => fleet.xlsx.writeFile(tmp), { overwrite });
-  await writeAtomically(files[1]!, (tmp) => year.xlsx.writeFile(tmp), { overwrite });
+  const yearCalc = await recalculateAndSave(year, () => writeAtomically(files[1]!, (tmp) => year.xlsx.writeFile(tmp), { overwrite }));
 
   const c = FLEET_COLUMNS;
   const rows = FLEET.map((u, i) => ({
