@@ -134,6 +134,22 @@ describe('reading, recalculating and writing .xlsx', () => {
   });
 });
 
+describe('values as exceljs gives them', () => {
+  it('a date is its Excel serial number (1 January 2025 is day 45658)', () => {
+    const wb = new ExcelJS.Workbook();
+    const ws = wb.addWorksheet('S');
+    ws.getCell('A1').value = new Date(Date.UTC(2025, 0, 1));
+    ws.getCell('A1').numFmt = 'yyyy-mm-dd';
+    ws.getCell('B1').value = { formula: 'A1+1' };
+    ws.getCell('C1').value = { richText: [{ text: 'Dyn' }, { text: '11' }] };
+    ws.getCell('D1').value = { formula: 'XFMR.SHIFT(C1)' };
+    const results = recalculate(wb);
+    // Day 0 of the 1900 date system is 30 December 1899 (from memory); 2025-01-01 is 45,658 days later.
+    expect(results[0]!.value).toBe(45659);
+    expect(results[1]!.value).toBe(330);
+  });
+});
+
 describe('what is not an .xlsx workbook', () => {
   it('garbage, text and an empty file are refused with a reason', async () => {
     await expect(loadWorkbook(Buffer.from('kva,p0_w\n1000,1400\n'))).rejects.toThrow(/not an \.xlsx workbook/);
