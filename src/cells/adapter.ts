@@ -12,6 +12,16 @@ export type ErrorKind = 'VALUE' | 'NUM' | 'NA';
 export type ErrorFactory = (kind: ErrorKind, message: string) => unknown;
 export type CellFunction = (...args: unknown[]) => unknown[][];
 
+export interface AdaptOptions {
+  /**
+   * Recognises an error value of the host spreadsheet inside an argument (a #DIV/0! three rows up
+   * a range). Such a value is passed through unchanged to the result elements that read it — the
+   * whole result for a series or a block argument — instead of being refused as a wrong type.
+   * Without it an error value is refused like any other non-number, with a #VALUE! message.
+   */
+  readonly isError?: (value: unknown) => boolean;
+}
+
 /** A stand-in error value for tests and tools that have no spreadsheet of their own. */
 export class CellError {
   constructor(
@@ -29,11 +39,18 @@ interface Coerced {
   readonly rows: number;
   readonly cols: number;
   readonly values: unknown[];
-  /** Per-element refusal messages, or null when every element is usable. */
-  readonly faults: (string | undefined)[] | null;
+  /** Per-element faults — a refusal message or a host error passed through — or null when every element is usable. */
+  readonly faults: unknown[] | null;
 }
 
 class WholeArgumentError extends Error {}
+
+/** A host error value met in a series or block argument: it becomes the whole result. */
+class PassedError {
+  constructor(readonly value: unknown) {}
+}
+
+const noHostErrors = (): boolean => false;
 
 const isBlank = (v: unknown): boolean => v === null || v === undefined || v === '';
 
@@ -81,12 +98,12 @@ function coerceCell(arg: ArgDecl, v: unknown): { value?: unknown; fault?: string
   }
 }
 
-function coerceBroadcast(arg: ArgDecl, raw: unknown): Coerced {
+function coerceBroadcast(arg: ArgDecl, raw: unknown, isError: (v: unknown) => boolean): Coerced {
   const m = asMatrix(arg.name, raw);
   const rows = m.length;
   const cols = m[0]!.length;
   const values = new Array<unknown>(rows * cols);
-  let faults: (string | undefined)[] | null = null;
+  let faults: unknown[] | null = null;
   let k = 0;
   for (let i = 0; i < rows; i++) {
     const row = m[i]!;
@@ -97,9 +114,9 @@ function coerceBroadcast(arg: ArgDecl, raw: unknown): Coerced {
         values[k] = v;
         continue;
       }
-      const c = coerceCell(arg, v);
+      const c: { value?: unknown; fault?: unknown } = isError(v) ? { fault: v } : coerceCell(arg, v);
       if (c.fault !== undefined) {
-        faults ??= new Array<string | undefined>(rows * cols);
+        faults ??= new Array<unknown>(rows * cols);
         faults[k] = c.fault;
       } else {
         values[k] = c.value;
@@ -113,7 +130,7 @@ function coerceBroadcast(arg: ArgDecl, raw: unknown): Coerced {
  * A series arrives as any block of cells and is read row by row. Blank cells after the last value
  * are dropped (a range drawn longer than the data); a blank inside the series is refused.
  */
-function coerceSeries(arg: ArgDecl, raw: unknown): Float64Array | undefined {
+function coerceSeries(arg: ArgDecl, raw: unknown, isError: (v: unknown) => boolean): Float64Array | undefined {
   const m = asMatrix(arg.name, raw);
   const flat: unknown[] = [];
   for (const row of m) for (const v of row) flat.push(v);
@@ -130,6 +147,7 @@ function coerceSeries(arg: ArgDecl, raw: unknown): Float64Array | undefined {
       out[i] = v;
       continue;
     }
+    if (isError(v)) throw new PassedError(v);
     const what = isBlank(v) ? 'is blank' : typeof v === 'number' ? 'is not a finite number' : describe(v);
     throw new WholeArgumentError(`argument ${arg.name}: value ${i + 1} ${what}; every value of the series must be a number (${arg.unit})`);
   }
@@ -151,13 +169,17 @@ function resultCell(value: Scalar, makeError: ErrorFactory): unknown {
 }
 
 /** Builds the spreadsheet-facing function for a declaration. */
-export function adapt(decl: CellFunctionDecl, makeError: ErrorFactory): CellFunction {
+export function adapt(decl: CellFunctionDecl, makeError: ErrorFactory, options: AdaptOptions = {}): CellFunction {
   const args = decl.args;
+  const isError = options.isError ?? noHostErrors;
   return (...raw: unknown[]): unknown[][] => {
     try {
-      return decl.kind === 'each' ? runEach(decl.compute, args, raw, makeError) : runBlock(decl.compute, args, raw, makeError);
+      return decl.kind === 'each'
+        ? runEach(decl.compute, args, raw, makeError, isError)
+        : runBlock(decl.compute, args, raw, makeError, isError);
     } catch (error) {
       if (error instanceof WholeArgumentError) return [[makeError('VALUE', error.message)]];
+      if (error instanceof PassedError) return [[error.value]];
       return [[refusal(error, makeError)]];
     }
   };
@@ -193,7 +215,13 @@ interface Varying {
   readonly colSel: number;
 }
 
-function runEach(compute: (...a: any[]) => Scalar, decls: readonly ArgDecl[], raw: unknown[], makeError: ErrorFactory): unknown[][] {
+function runEach(
+  compute: (...a: any[]) => Scalar,
+  decls: readonly ArgDecl[],
+  raw: unknown[],
+  makeError: ErrorFactory,
+  isError: (v: unknown) => boolean,
+): unknown[][] {
   const n = decls.length;
   const buf = new Array<unknown>(n);
   const varying: Varying[] = [];
@@ -202,11 +230,12 @@ function runEach(compute: (...a: any[]) => Scalar, decls: readonly ArgDecl[], ra
   let rowsFrom = '';
   let colsFrom = '';
   // A single-cell argument's fault spoils every element alike; the first one found is reported.
-  let constantFault: string | undefined;
+  // A message becomes #VALUE!; a host error value is passed through as it is.
+  let constantFault: unknown;
   for (let k = 0; k < n; k++) {
     const d = decls[k]!;
     if (d.series) {
-      buf[k] = coerceSeries(d, raw[k]);
+      buf[k] = coerceSeries(d, raw[k], isError);
       continue;
     }
     const m = asMatrix(d.name, raw[k]);
@@ -224,7 +253,8 @@ function runEach(compute: (...a: any[]) => Scalar, decls: readonly ArgDecl[], ra
     }
     if (r === 1 && c === 1) {
       // Coerced once and held in the buffer for every element.
-      const one = coerceCell(d, m[0]![0]);
+      const cell = m[0]![0];
+      const one: { value?: unknown; fault?: unknown } = isError(cell) ? { fault: cell } : coerceCell(d, cell);
       buf[k] = one.value;
       if (one.fault !== undefined && constantFault === undefined) constantFault = one.fault;
     } else {
@@ -234,7 +264,7 @@ function runEach(compute: (...a: any[]) => Scalar, decls: readonly ArgDecl[], ra
   const call = caller(compute, n);
   const v = varying.length;
   const element = (i: number, j: number): unknown => {
-    if (constantFault !== undefined) return makeError('VALUE', constantFault);
+    if (constantFault !== undefined) return typeof constantFault === 'string' ? makeError('VALUE', constantFault) : constantFault;
     for (let q = 0; q < v; q++) {
       const a = varying[q]!;
       const cell = a.cells[i * a.rowSel]![j * a.colSel];
@@ -243,6 +273,7 @@ function runEach(compute: (...a: any[]) => Scalar, decls: readonly ArgDecl[], ra
         buf[a.k] = cell;
         continue;
       }
+      if (isError(cell)) return cell;
       const c = coerceCell(a.decl, cell);
       if (c.fault !== undefined) return makeError('VALUE', c.fault);
       buf[a.k] = c.value;
@@ -267,14 +298,23 @@ function runEach(compute: (...a: any[]) => Scalar, decls: readonly ArgDecl[], ra
   return out;
 }
 
-function runBlock(compute: (...a: any[]) => Scalar[][], decls: readonly ArgDecl[], raw: unknown[], makeError: ErrorFactory): unknown[][] {
+function runBlock(
+  compute: (...a: any[]) => Scalar[][],
+  decls: readonly ArgDecl[],
+  raw: unknown[],
+  makeError: ErrorFactory,
+  isError: (v: unknown) => boolean,
+): unknown[][] {
   const values = decls.map((d, k) => {
-    if (d.series) return coerceSeries(d, raw[k]);
-    const c = coerceBroadcast(d, raw[k]);
+    if (d.series) return coerceSeries(d, raw[k], isError);
+    const c = coerceBroadcast(d, raw[k], isError);
     if (c.rows !== 1 || c.cols !== 1) {
       throw new WholeArgumentError(`argument ${d.name}: is ${c.rows}×${c.cols} cells; this function takes a single value here`);
     }
-    if (c.faults !== null) throw new WholeArgumentError(c.faults[0]!);
+    if (c.faults !== null) {
+      const fault = c.faults[0];
+      throw typeof fault === 'string' ? new WholeArgumentError(fault) : new PassedError(fault);
+    }
     return c.values[0];
   });
   const result = compute(...values);

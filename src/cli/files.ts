@@ -1,0 +1,167 @@
+/**
+ * The file rules of the command line: nothing the user owns is overwritten unless they say so,
+ * never the input, and an output appears whole or not at all (temp file in the same folder, then
+ * a rename, which replaces a name in one step on the same file system).
+ */
+import { randomBytes } from 'node:crypto';
+import { promises as fs, constants as fsc, unlinkSync } from 'node:fs';
+import { basename, dirname, join, resolve } from 'node:path';
+
+/** A refusal the user can act on: printed as one line, exit code 2. */
+export class UsageError extends Error {
+  override name = 'UsageError';
+}
+
+export const TEMP_PREFIX = '.fluxbook-tmp-';
+
+function reason(error: unknown): string {
+  const code = (error as NodeJS.ErrnoException).code;
+  if (code === 'ENOENT') return 'no such file';
+  if (code === 'EACCES' || code === 'EPERM') return 'permission denied';
+  if (code === 'EISDIR') return 'is a folder, not a file';
+  return error instanceof Error ? error.message : String(error);
+}
+
+/** The bytes of an input file, or a UsageError saying why there are none. */
+export async function readInput(path: string): Promise<Buffer> {
+  try {
+    const stat = await fs.stat(path);
+    if (stat.isDirectory()) throw new UsageError(`${path}: is a folder, not a workbook`);
+    return await fs.readFile(path);
+  } catch (error) {
+    if (error instanceof UsageError) throw error;
+    throw new UsageError(`${path}: ${reason(error)}`);
+  }
+}
+
+/** The real path a file has or would have (its folder resolved when the file does not exist yet). */
+async function realTarget(path: string): Promise<string> {
+  const full = resolve(path);
+  try {
+    return await fs.realpath(full);
+  } catch {
+    try {
+      return join(await fs.realpath(dirname(full)), basename(full));
+    } catch {
+      return full;
+    }
+  }
+}
+
+/** True when both names reach the same file: same real path, or the same inode (a hard link). */
+export async function sameFile(a: string, b: string): Promise<boolean> {
+  if ((await realTarget(a)) === (await realTarget(b))) return true;
+  try {
+    const [sa, sb] = await Promise.all([fs.stat(a), fs.stat(b)]);
+    return sa.dev === sb.dev && sa.ino === sb.ino;
+  } catch {
+    return false;
+  }
+}
+
+async function exists(path: string): Promise<boolean> {
+  try {
+    await fs.lstat(path);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+/** Checks an output path before any work: its folder exists, and it is not a file we may not replace. */
+export async function checkOutput(out: string, options: { overwrite: boolean; notSameAs?: string }): Promise<void> {
+  if (options.notSameAs !== undefined && (await sameFile(options.notSameAs, out))) {
+    throw new UsageError(`${out}: is the input workbook; Fluxbook never writes over its input — give another --out`);
+  }
+  const folder = dirname(resolve(out));
+  try {
+    if (!(await fs.stat(folder)).isDirectory()) throw new Error();
+  } catch {
+    throw new UsageError(`${out}: the folder ${folder} does not exist`);
+  }
+  if (!options.overwrite && (await exists(out))) {
+    throw new UsageError(`${out}: exists already; give --overwrite to replace it, or another name`);
+  }
+}
+
+let pendingTemps = new Set<string>();
+let handlersInstalled = false;
+
+/** On Ctrl-C or a polite kill, remove the temp files of writes under way (a SIGKILL leaves one behind, never a half output). */
+function installSignalHandlers(): void {
+  if (handlersInstalled) return;
+  handlersInstalled = true;
+  for (const [signal, code] of [
+    ['SIGINT', 130],
+    ['SIGTERM', 143],
+  ] as const) {
+    process.on(signal, () => {
+      for (const tmp of pendingTemps) {
+        try {
+          unlinkSync(tmp);
+        } catch {
+          // already gone
+        }
+      }
+      pendingTemps = new Set();
+      process.exit(code);
+    });
+  }
+}
+
+/**
+ * Writes `target` whole or not at all: `write` fills a temp file beside it, which is flushed to
+ * disk and then renamed onto the target. Without `overwrite` the final step is a hard link, which
+ * fails rather than replace a file that appeared meanwhile (a rename where links are not possible).
+ */
+export async function writeAtomically(target: string, write: (tmp: string) => Promise<void>, options: { overwrite: boolean }): Promise<void> {
+  installSignalHandlers();
+  const full = resolve(target);
+  const tmp = join(dirname(full), `${TEMP_PREFIX}${process.pid}-${randomBytes(4).toString('hex')}-${basename(full)}`);
+  pendingTemps.add(tmp);
+  try {
+    await write(tmp);
+    const handle = await fs.open(tmp, fsc.O_RDONLY);
+    try {
+      await handle.sync();
+    } finally {
+      await handle.close();
+    }
+    if (options.overwrite) {
+      await fs.rename(tmp, full);
+    } else {
+      await linkWithoutReplacing(tmp, full);
+    }
+    await syncFolder(dirname(full));
+  } finally {
+    pendingTemps.delete(tmp);
+    await fs.rm(tmp, { force: true });
+  }
+}
+
+async function linkWithoutReplacing(tmp: string, full: string): Promise<void> {
+  try {
+    await fs.link(tmp, full);
+  } catch (error) {
+    const code = (error as NodeJS.ErrnoException).code;
+    if (code === 'EEXIST') throw new UsageError(`${full}: appeared while Fluxbook was working; not replaced`);
+    if (code !== 'EPERM' && code !== 'ENOTSUP' && code !== 'EOPNOTSUPP' && code !== 'EXDEV' && code !== 'ENOSYS') throw error;
+    // A file system without hard links: check, then rename.
+    if (await exists(full)) throw new UsageError(`${full}: appeared while Fluxbook was working; not replaced`);
+    await fs.rename(tmp, full);
+  }
+}
+
+/** Makes the rename itself durable; not every platform can open a folder, which is no fault. */
+async function syncFolder(folder: string): Promise<void> {
+  try {
+    const handle = await fs.open(folder, fsc.O_RDONLY);
+    try {
+      await handle.sync();
+    } finally {
+      await handle.close();
+    }
+  } catch {
+    // best effort
+  }
+}
