@@ -8,8 +8,9 @@ import * as efficiency from './functions/efficiency';
 import * as energy from './functions/energy';
 import * as losses from './functions/losses';
 import * as ratio from './functions/ratio';
+import * as thermal from './functions/thermal';
 
-const groups: Record<string, CellFunctionDecl>[] = [ratio, current, losses, efficiency, energy];
+const groups: Record<string, CellFunctionDecl>[] = [ratio, current, losses, efficiency, energy, thermal];
 
 export const catalog: readonly CellFunctionDecl[] = groups.flatMap((g) => Object.values(g));
 
