@@ -60,12 +60,9 @@ export function referenceHotSpot(paper: Paper): number {
 
 /** Σ V(θh_i): the sum of the aging rates over a hot-spot series (multiply by the step for hours). */
 export function agingRateSum(hotSpots: Float64Array, paper: Paper): number {
+  const rate = paper === 'upgraded' ? upgradedRate : normalRate;
   let sum = 0;
-  if (paper === 'upgraded') {
-    for (let i = 0; i < hotSpots.length; i++) sum += Math.exp(A - B / (hotSpots[i]! + CELSIUS_TO_KELVIN));
-  } else {
-    for (let i = 0; i < hotSpots.length; i++) sum += Math.exp((hotSpots[i]! - 98) * DOUBLING);
-  }
+  for (let i = 0; i < hotSpots.length; i++) sum += rate(hotSpots[i]!);
   return sum;
 }
 

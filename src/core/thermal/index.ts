@@ -60,36 +60,24 @@ export function hotSpotProfile(
   return profileHotSpots(thermalModel(cooling, method, topOilRise, hotSpotGradient, lossRatio), loads, ambients, stepHours);
 }
 
-/** XFMR.FEQA: equivalent aging factor over the profile, Σ V·Δt / Σ Δt (equal steps: the mean rate). */
-export function equivalentAging(
-  loads: Float64Array,
-  ambients: Float64Array,
-  stepHours: number,
-  cooling: string,
-  topOilRise: number | undefined,
-  hotSpotGradient: number | undefined,
-  lossRatio: number | undefined,
-  method: string,
-  paper: string,
-): number {
+/** The arguments of FEQA and LIFEUSED: those of hotSpotProfile, then the paper kind. */
+type AgingArgs = [...Parameters<typeof hotSpotProfile>, paper: string];
+
+/** Σ V over the profile's end-of-step hot-spots, for the paper named last. */
+function agingSum(args: AgingArgs): number {
+  const [loads, ambients, stepHours, cooling, topOilRise, hotSpotGradient, lossRatio, method, paper] = args;
   const hotSpots = hotSpotProfile(loads, ambients, stepHours, cooling, topOilRise, hotSpotGradient, lossRatio, method);
-  return agingRateSum(hotSpots, parsePaper(paper)) / hotSpots.length;
+  return agingRateSum(hotSpots, parsePaper(paper));
+}
+
+/** XFMR.FEQA: equivalent aging factor over the profile, Σ V·Δt / Σ Δt (equal steps: the mean rate). */
+export function equivalentAging(...args: AgingArgs): number {
+  return agingSum(args) / args[0].length;
 }
 
 /** XFMR.LIFEUSED: insulation life consumed over the profile, Σ V·Δt, hours at the reference hot-spot. */
-export function lifeUsedHours(
-  loads: Float64Array,
-  ambients: Float64Array,
-  stepHours: number,
-  cooling: string,
-  topOilRise: number | undefined,
-  hotSpotGradient: number | undefined,
-  lossRatio: number | undefined,
-  method: string,
-  paper: string,
-): number {
-  const hotSpots = hotSpotProfile(loads, ambients, stepHours, cooling, topOilRise, hotSpotGradient, lossRatio, method);
-  return agingRateSum(hotSpots, parsePaper(paper)) * stepHours;
+export function lifeUsedHours(...args: AgingArgs): number {
+  return agingSum(args) * args[2];
 }
 
 export interface LoadingYearOptions {

@@ -7,7 +7,7 @@
  * and the largest steady load whose hot-spot reaches a limit.
  */
 import { NoAnswerError, shown } from '../errors';
-import { ambientTemperature, nonNegative, perUnitLoadAtMost, positive, within } from '../guards';
+import { ambientTemperature, perUnitLoadAtMost, positive, within } from '../guards';
 import { parseCooling, parseThermalMethod, thermalCharacteristics, type ThermalCharacteristics } from './coolingTable';
 
 /** Loads above this many per unit are refused: far beyond the loading guides' emergency limits. */
@@ -34,7 +34,7 @@ export function thermalModel(
     ...row,
     topOilRise: topOilRise === undefined ? row.topOilRise : ratedRise('top_oil_rise', topOilRise, 120),
     hotSpotGradient: hotSpotGradient === undefined ? row.hotSpotGradient : ratedRise('hs_gradient', hotSpotGradient, 100),
-    lossRatio: lossRatio === undefined ? row.lossRatio : within('loss_ratio', nonNegative('loss_ratio', lossRatio), 0, 100, '', 'the ratio of load loss to no-load loss'),
+    lossRatio: lossRatio === undefined ? row.lossRatio : within('loss_ratio', lossRatio, 0, 100, '', 'the ratio of load loss to no-load loss'),
     source: `${row.source}; rated values from the user`,
   };
 }
