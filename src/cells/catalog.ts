@@ -14,6 +14,7 @@ import * as ratio from './functions/ratio';
 import * as regulation from './functions/regulation';
 import * as rules from './functions/rules';
 import * as sizing from './functions/sizing';
+import * as thermal from './functions/thermal';
 
 // COMPLIES (compliance) stays last: it checks a unit against the rules listed just before it.
 const groups: Record<string, CellFunctionDecl>[] = [
@@ -24,6 +25,7 @@ const groups: Record<string, CellFunctionDecl>[] = [
   harmonics,
   efficiency,
   energy,
+  thermal,
   cost,
   regulation,
   rules,

@@ -48,6 +48,19 @@ export function perUnitLoad(name: string, value: number): number {
   return nonNegative(name, value);
 }
 
+/**
+ * A per-unit load with a ceiling, where a model holds only so far (the loading guides' thermal
+ * models beyond a few times rated current). A value far above it is most often a load typed in
+ * kVA, so the message says how to fix it.
+ */
+export function perUnitLoadAtMost(name: string, value: number, max: number): number {
+  perUnitLoad(name, value);
+  if (value > max) {
+    throw new InputError(name, `${shown(value)} per unit is above ${shown(max)}, beyond the model's range; give the load as kVA ÷ nameplate kVA (1 = full load)`);
+  }
+  return value;
+}
+
 /** Power factor, 0 exclusive to 1 inclusive (a zero power factor delivers no energy to rate). */
 export function powerFactor(name: string, value: number): number {
   if (value > 0 && value <= 1) return value;
@@ -140,4 +153,18 @@ export function oneOf<T extends string>(name: string, text: string, options: rea
     throw new InputError(name, `"${String(text)}" is not one of ${options.map((o) => `"${o}"`).join(', ')}`);
   }
   return hit;
+}
+
+/** A number from low to high inclusive; `what` names the quantity in the message ("an ambient temperature"). */
+export function within(name: string, value: number, low: number, high: number, unit: string, what = 'the value'): number {
+  finite(name, value);
+  if (!(value >= low && value <= high)) {
+    throw new InputError(name, `${shown(value)} ${unit} is out of range; ${what} must be from ${shown(low)} to ${shown(high)} ${unit}`);
+  }
+  return value;
+}
+
+/** Ambient air temperature where transformers are installed: -60 to 60 °C (plausibility bound). */
+export function ambientTemperature(name: string, value: number): number {
+  return within(name, value, -60, 60, '°C', 'an ambient temperature');
 }

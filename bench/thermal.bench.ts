@@ -1,0 +1,94 @@
+/**
+ * Speed of the loading-and-aging kernel: one unit-year of 8,760 hourly steps (target ≤ 0.5 ms),
+ * a fleet of 1,000 unit-years (target ≤ 1 s), beside a bare loop of the same transcendental calls
+ * the kernel and the aging sum make (two logs and three exps a step, for IEEE ONAN), which is the
+ * floor any implementation of these formulas pays, and a loop of Math.pow for the reason the
+ * kernel takes powers as exp(p·ln b).
+ * Run: npx tsx bench/thermal.bench.ts
+ */
+import { Bench } from 'tinybench';
+import { adapt, plainErrors } from '../src/cells/adapter';
+import { FEQA } from '../src/cells/functions/thermal';
+import { agingRateSum, hotSpotSeriesInto, IEC_DISTRIBUTION_ONAN, IEEE_ROWS, type ThermalCharacteristics } from '../src/core/thermal';
+
+const STEPS = 8760;
+const UNITS = 1000;
+const loads = Float64Array.from({ length: STEPS }, (_, i) => 0.55 + 0.35 * Math.sin((2 * Math.PI * (i - 8)) / 24) + 0.1 * Math.sin(i / 37));
+const ambients = Float64Array.from({ length: STEPS }, (_, i) => 12 + 10 * Math.sin((2 * Math.PI * (i - 2900)) / STEPS) + 4 * Math.sin((2 * Math.PI * i) / 24));
+const out = new Float64Array(STEPS);
+
+/** 1,000 units of the fleet: the same profile scaled, each with its own rated rises. */
+const fleet: ThermalCharacteristics[] = Array.from({ length: UNITS }, (_, u) => ({
+  ...IEEE_ROWS.ONAN,
+  topOilRise: 50 + (u % 10),
+  hotSpotGradient: 20 + (u % 7),
+}));
+
+let sink = 0;
+
+function unitYear(m: ThermalCharacteristics): number {
+  hotSpotSeriesInto(m, loads, ambients, 1, out);
+  return agingRateSum(out, 'upgraded');
+}
+
+/** The calls the kernel and aging sum make per step, with nothing else: two Math.log, three Math.exp. */
+function bareLoop(): number {
+  let s = 0;
+  for (let i = 0; i < STEPS; i++) {
+    const k2 = loads[i]! * loads[i]!;
+    s += Math.exp(0.8 * Math.log((1 + 5 * k2) / 6)) + Math.exp(0.8 * Math.log(k2)) + Math.exp(39.16 - 15000 / (ambients[i]! + 353));
+  }
+  return s;
+}
+
+/** The two powers a step written with Math.pow instead. */
+function powLoop(): number {
+  let s = 0;
+  for (let i = 0; i < STEPS; i++) {
+    const k2 = loads[i]! * loads[i]!;
+    s += Math.pow((1 + 5 * k2) / 6, 0.8) + Math.pow(k2, 0.8);
+  }
+  return s;
+}
+
+const feqaCell = adapt(FEQA, plainErrors);
+const loadColumn = Array.from(loads, (v) => [v]);
+const ambientColumn = Array.from(ambients, (v) => [v]);
+
+const bench = new Bench({ time: 1500, warmupTime: 300 });
+bench
+  .add('bare loop: 8,760 × (2 log + 3 exp)', () => {
+    sink += bareLoop();
+  })
+  .add('bare loop: 8,760 × 2 Math.pow', () => {
+    sink += powLoop();
+  })
+  .add('kernel: hot-spot series, IEEE ONAN, 1 unit-year', () => {
+    sink += hotSpotSeriesInto(IEEE_ROWS.ONAN, loads, ambients, 1, out)[STEPS - 1]!;
+  })
+  .add('kernel + aging (F_EQA), IEEE ONAN, 1 unit-year', () => {
+    sink += unitYear(IEEE_ROWS.ONAN);
+  })
+  .add('kernel + aging (F_EQA), IEC distribution ONAN, 1 unit-year', () => {
+    sink += unitYear(IEC_DISTRIBUTION_ONAN);
+  })
+  .add('kernel + aging, 1,000 unit-years', () => {
+    for (const m of fleet) sink += unitYear(m);
+  })
+  .add('cell XFMR.FEQA (coerce 8,760-row columns + checks + kernel)', () => {
+    sink += feqaCell(loadColumn, ambientColumn)[0]![0] as number;
+  });
+
+bench.runSync();
+
+console.log(`Node ${process.version}; times per run of each task, ms (median is the robust figure on a shared machine).`);
+console.table(
+  bench.tasks.map((t) => {
+    const r = t.result as { latency?: { min: number; p50: number; mean: number; p99: number; samplesCount: number } };
+    const l = r.latency!;
+    const ms = (v: number) => Number(v.toFixed(4));
+    return { task: t.name, 'min': ms(l.min), 'median': ms(l.p50), 'mean': ms(l.mean), 'p99': ms(l.p99), runs: l.samplesCount };
+  }),
+);
+console.log('Targets: one unit-year ≤ 0.5 ms on the core kernel; 1,000 unit-years ≤ 1,000 ms.');
+if (!Number.isFinite(sink)) throw new Error('benchmark result is not finite');
