@@ -7,7 +7,7 @@ import { findFunction } from '../src/cells/catalog';
 import { efficiencyAt } from '../src/core/efficiency';
 import { type BenchRow, meanMs, ms } from './harness';
 
-export async function adapterOverhead(n = 100_000): Promise<BenchRow> {
+export async function adapterOverhead(n = 100_000): Promise<BenchRow[]> {
   const kva = new Float64Array(n);
   const load = new Float64Array(n);
   for (let i = 0; i < n; i++) {
@@ -28,15 +28,30 @@ export async function adapterOverhead(n = 100_000): Promise<BenchRow> {
       for (let i = 0; i < n; i++) out[i] = efficiencyAt(kva[i]!, 1400, 10500, load[i]!, 1);
       sink += out[n - 1]!;
     },
+    // The least any spreadsheet-facing code pays: the same loop reading the cells Excel passes and
+    // returning the one-cell rows Excel's spill format needs.
+    rawWithCells: () => {
+      const out = new Array<number[]>(n);
+      for (let i = 0; i < n; i++) out[i] = [efficiencyAt(kvaCells[i]![0]!, 1400, 10500, loadCells[i]![0]!, 1)];
+      sink += out.length;
+    },
   });
   if (sink === 42) console.log(''); // keep the results alive
   const ratio = t.adapter! / t.raw!;
-  return {
+  const floorRatio = t.adapter! / t.rawWithCells!;
+  return [{
     measure: `adapter: EFF over ${n.toLocaleString('en')} cells vs raw core loop`,
     ours: ms(t.adapter!),
     reference: ms(t.raw!),
     ratio: `${ratio.toFixed(2)}×`,
     goal: '≤ 1.5×',
     met: ratio <= 1.5,
-  };
+  }, {
+    measure: `adapter: the same, vs raw loop reading cells and returning Excel's spill rows`,
+    ours: ms(t.adapter!),
+    reference: ms(t.rawWithCells!),
+    ratio: `${floorRatio.toFixed(2)}×`,
+    goal: '≤ 1.5×',
+    met: floorRatio <= 1.5,
+  }];
 }

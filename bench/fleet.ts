@@ -18,73 +18,90 @@ function fleetColumns(n: number): RawCellContent[][] {
   return rows;
 }
 
-function withOurs(data: RawCellContent[][]): RawCellContent[][] {
-  const n = data.length;
-  const rows = data.map((r) => [...r]);
-  rows[0]!.push(`=XFMR.IRATED(A1:A${n}, B1:B${n})`, `=XFMR.EFF(A1:A${n}, C1:C${n}, D1:D${n}, 0.5)`, `=XFMR.LOADLOSS(D1:D${n}, 0.5)`);
-  return rows;
+function ourFormulas(n: number): RawCellContent[][] {
+  return [[`=XFMR.IRATED(A1:A${n}, B1:B${n})`, `=XFMR.EFF(A1:A${n}, C1:C${n}, D1:D${n}, 0.5)`, `=XFMR.LOADLOSS(D1:D${n}, 0.5)`]];
 }
 
-function withNative(data: RawCellContent[][]): RawCellContent[][] {
-  return data.map((r, i) => {
+function nativeFormulas(n: number): RawCellContent[][] {
+  return Array.from({ length: n }, (_, i) => {
     const k = i + 1;
-    return [
-      ...r,
-      `=A${k}*1000/(SQRT(3)*B${k})`,
-      `=0.5*A${k}*1000/(0.5*A${k}*1000+C${k}+0.25*D${k})`,
-      `=D${k}*0.25`,
-    ];
+    return [`=A${k}*1000/(SQRT(3)*B${k})`, `=0.5*A${k}*1000/(0.5*A${k}*1000+C${k}+0.25*D${k})`, `=D${k}*0.25`];
   });
 }
 
 const gc = (globalThis as { gc?: () => void }).gc;
+const heapMb = () => process.memoryUsage().heapUsed / 2 ** 20;
 
-/** Best of `runs` wall times for building + computing, and the heap held once built. */
-function measure(sheet: () => RawCellContent[][], check: (hf: ReturnType<typeof createEngine>) => void, runs: number): { ms: number; heapMb: number } {
-  let best = Infinity;
-  let heapMb = 0;
+interface Timing {
+  /** Entering the formulas into a workbook that already holds the fleet's data, and computing them. */
+  readonly formulasMs: number;
+  /** Building the whole workbook, data and formulas, from nothing. */
+  readonly wholeMs: number;
+  /** Heap held by the computed workbook, above what the process held before. */
+  readonly heapMb: number;
+  readonly lastEfficiency: number;
+}
+
+function measure(data: RawCellContent[][], formulas: RawCellContent[][], runs: number): Timing {
+  let formulasMs = Infinity;
+  let wholeMs = Infinity;
+  let held = 0;
+  let lastEfficiency = Number.NaN;
+  const n = data.length;
   for (let r = 0; r < runs; r++) {
-    const rows = sheet();
     gc?.();
-    const before = process.memoryUsage().heapUsed;
+    const base = heapMb();
+    const hf = createEngine({ Fleet: data.map((row) => [...row]) });
     const t = performance.now();
-    const hf = createEngine({ Fleet: rows });
-    const elapsed = performance.now() - t;
-    check(hf);
-    heapMb = Math.max(heapMb, (process.memoryUsage().heapUsed - before) / 2 ** 20);
+    hf.batch(() => hf.setCellContents({ sheet: 0, row: 0, col: 4 }, formulas));
+    formulasMs = Math.min(formulasMs, performance.now() - t);
+    lastEfficiency = hf.getCellValue({ sheet: 0, row: n - 1, col: 5 }) as number;
+    held = Math.max(held, heapMb() - base);
     hf.destroy();
-    best = Math.min(best, elapsed);
+    gc?.();
+    const whole = data.map((row, i) => [...row, ...(formulas[i] ?? [])]);
+    const t2 = performance.now();
+    createEngine({ Fleet: whole }).destroy();
+    wholeMs = Math.min(wholeMs, performance.now() - t2);
   }
-  return { ms: best, heapMb };
+  return { formulasMs, wholeMs, heapMb: held, lastEfficiency };
 }
 
 export interface FleetResult {
   readonly rows: BenchRow[];
-  readonly peakHeapMb: number;
 }
 
 export function fleetBenchmark(n = 100_000): FleetResult {
   const data = fleetColumns(n);
-  const lastRow = { sheet: 0, row: n - 1, col: 5 };
+  const ours = measure(data, ourFormulas(n), 3);
+  const native = measure(data, nativeFormulas(n), 2);
   // The same last efficiency from both workbooks: the comparison is of like with like.
-  let oursLast = 0;
-  let nativeLast = 0;
-  const ours = measure(() => withOurs(data), (hf) => void (oursLast = hf.getCellValue(lastRow) as number), 3);
-  const native = measure(() => withNative(data), (hf) => void (nativeLast = hf.getCellValue(lastRow) as number), 2);
-  if (Math.abs(oursLast - nativeLast) > 1e-12) throw new Error(`fleet results differ: ${oursLast} vs ${nativeLast}`);
-  const speedup = native.ms / ours.ms;
+  if (Math.abs(ours.lastEfficiency - native.lastEfficiency) > 1e-12) {
+    throw new Error(`fleet results differ: ${ours.lastEfficiency} vs ${native.lastEfficiency}`);
+  }
+  const formulaSpeedup = native.formulasMs / ours.formulasMs;
+  const wholeSpeedup = native.wholeMs / ours.wholeMs;
+  const units = n.toLocaleString('en');
   return {
     rows: [
       {
-        measure: `fleet: ${n.toLocaleString('en')} units × 3 functions in the engine (ours: 3 range formulas; reference: ${(3 * n).toLocaleString('en')} native formulas)`,
-        ours: ms(ours.ms),
-        reference: ms(native.ms),
-        ratio: `${speedup.toFixed(1)}× faster`,
+        measure: `fleet: ${units} units × (IRATED, EFF, LOADLOSS) entered and computed — 3 range formulas vs ${(3 * n).toLocaleString('en')} native formulas`,
+        ours: ms(ours.formulasMs),
+        reference: ms(native.formulasMs),
+        ratio: `${formulaSpeedup.toFixed(1)}× faster`,
         goal: '≥ 20× faster',
-        met: speedup >= 20,
+        met: formulaSpeedup >= 20,
       },
       {
-        measure: `memory: heap held by the ${n.toLocaleString('en')}-unit fleet workbook once computed`,
+        measure: `fleet: the same, whole workbook built from nothing (the ${units}×4 data cells included)`,
+        ours: ms(ours.wholeMs),
+        reference: ms(native.wholeMs),
+        ratio: `${wholeSpeedup.toFixed(1)}× faster`,
+        goal: '≥ 20× faster',
+        met: wholeSpeedup >= 20,
+      },
+      {
+        measure: `memory: heap held by the computed ${units}-unit fleet workbook`,
         ours: `${ours.heapMb.toFixed(0)} MB`,
         reference: `${native.heapMb.toFixed(0)} MB`,
         ratio: `${(native.heapMb / ours.heapMb).toFixed(1)}× less`,
@@ -92,6 +109,5 @@ export function fleetBenchmark(n = 100_000): FleetResult {
         met: true,
       },
     ],
-    peakHeapMb: ours.heapMb,
   };
 }

@@ -78,8 +78,19 @@ function toAdapterScalar(v: unknown): unknown {
   return v;
 }
 
+/** True when every cell of a range is already a plain number, as a fleet's columns are. */
+function allPlainNumbers(data: readonly (readonly unknown[])[]): boolean {
+  for (const row of data) for (const v of row) if (typeof v !== 'number') return false;
+  return true;
+}
+
 function toAdapterArgument(v: unknown): unknown {
-  if (v instanceof SimpleRangeValue) return v.data.map((row) => row.map(toAdapterScalar));
+  if (v instanceof SimpleRangeValue) {
+    // The adapter only reads its arguments, so a range of plain numbers is handed over as it is:
+    // copying a 100,000-row column cell by cell costs more than the computation.
+    const data = v.data as unknown[][];
+    return allPlainNumbers(data) ? data : data.map((row) => row.map(toAdapterScalar));
+  }
   return toAdapterScalar(v);
 }
 
