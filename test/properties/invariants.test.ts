@@ -8,6 +8,7 @@ import { describe, expect, it } from 'vitest';
 import { allDayEfficiency, energyLost } from '../../src/core/energy';
 import { efficiencyAt, maxEfficiency, maxEfficiencyLoad } from '../../src/core/efficiency';
 import { totalLossesAt } from '../../src/core/losses';
+import { agingRateSum, lifeUsedHours } from '../../src/core/thermal';
 import { idealOutputCurrent, idealOutputVoltage } from '../../src/core/ratio';
 
 const kva = fc.double({ min: 5, max: 100_000, noNaN: true });
@@ -76,6 +77,22 @@ describe('invariants', () => {
           expect(energyLost(a, b, after, Float64Array.of(1))).toBeGreaterThanOrEqual(energyLost(a, b, before, Float64Array.of(1)));
         },
       ),
+    );
+  });
+
+  it('aging of a constant 110 °C hot-spot over T hours is T hours — IEEE C57.91 clause 5 (F_AA = 1 at 110 °C)', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 2000 }), fc.double({ min: 0.01, max: 24, noNaN: true }), (steps, hours) => {
+        const hotSpots = new Float64Array(steps).fill(110);
+        expect(agingRateSum(hotSpots, 'upgraded') * hours).toBeCloseTo(steps * hours, 9);
+        // Through the whole model: rated load at 30 °C ambient holds the IEEE default unit at
+        // 30 + 55 + 25 = 110 °C (65 °C-rise design, common practice).
+        const loads = new Float64Array(steps).fill(1);
+        const ambients = Float64Array.of(30);
+        const used = lifeUsedHours(loads, ambients, hours, 'ONAN', undefined, undefined, undefined, 'IEEE', 'upgraded');
+        expect(Math.abs(used - steps * hours) / (steps * hours)).toBeLessThan(1e-9);
+      }),
+      { numRuns: 200 },
     );
   });
 });
