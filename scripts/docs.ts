@@ -1,18 +1,19 @@
 /**
  * `npm run docs`: regenerates everything the docs derive from the declarations — the README's
- * function list (between its marker comments) and
+ * function list and "First sheet" walk-through (each between its marker comments) and
  * docs/functions.md. The examples are computed by the embedded engine; tests fail when any of
  * these files is stale.
  */
 import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { dirname } from 'node:path';
+import { withFirstSheet } from './first-sheet';
 import { FUNCTIONS_DOC, functionsDoc } from './functions-doc';
 import { withFunctionList } from './readme-functions';
 
 export const README = 'README.md';
 
 /** The README with both generated sections brought up to date. */
-export const currentReadme = (readme: string): string => withFunctionList(readme);
+export const currentReadme = (readme: string): string => withFirstSheet(withFunctionList(readme));
 
 function update(path: string, next: string): void {
   let before: string | undefined;
