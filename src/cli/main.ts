@@ -5,11 +5,24 @@
  */
 import { Command, CommanderError } from 'commander';
 import { SAFETY_NOTE } from '../cells/metadata';
+import type { FormulaResult } from '../engine/xlsx';
 import { calc } from './calc';
 import { demo, formatDemoSummary } from './demo';
 import { UsageError } from './files';
 
 const VERSION = '0.1.0';
+
+/** What the error values of a run are, where two kinds say more than a count: cycles and unknown names. */
+function errorKinds(results: FormulaResult[]): string {
+  const code = (r: FormulaResult) => (r.value !== null && typeof r.value === 'object' ? r.value.error : undefined);
+  const cycles = results.filter((r) => code(r) === '#CYCLE!').length;
+  const names = results.filter((r) => code(r) === '#NAME?').length;
+  const kinds = [
+    cycles > 0 ? `${cycles} in a circular reference (#CYCLE!, stored as #VALUE!)` : '',
+    names > 0 ? `${names} naming a function that does not exist (#NAME?)` : '',
+  ].filter(Boolean);
+  return kinds.length > 0 ? ` (${kinds.join('; ')}; --json shows each)` : '';
+}
 
 function program(): Command {
   const p = new Command('fluxbook')
@@ -42,7 +55,7 @@ function program(): Command {
       if (opts.json) {
         process.stdout.write(`${JSON.stringify(summary.results, null, 1)}\n`);
       } else {
-        const errors = summary.errors === 0 ? 'no errors' : `${summary.errors} with an error value`;
+        const errors = summary.errors === 0 ? 'no errors' : `${summary.errors} with an error value${errorKinds(summary.results)}`;
         process.stdout.write(`${opts.out}: ${summary.formulas} formulas recalculated (${summary.ours} with XFMR functions), ${errors}\n`);
       }
     });
