@@ -48,7 +48,10 @@ function program(): Command {
         'add-in loads and for other spreadsheets. A spilled result is stored as an array formula over\n' +
         'its range. The output is written to a temporary file beside it and renamed when complete.\n' +
         'A progress bar appears on stderr for workbooks of more than 50,000 formulas or a profile\n' +
-        'longer than 8,760 steps, when stderr is a terminal.',
+        'longer than 8,760 steps, when stderr is a terminal.\n' +
+        'Refused before reading (exit 2): a package cut short, one that would unpack to more than\n' +
+        '1 GiB (500 MiB a part) or unpacks past what it declares, and a workbook too large for the\n' +
+        'memory Node.js may use (NODE_OPTIONS=--max-old-space-size=MB allows more).',
     )
     .action(async (input: string, opts: { out: string; json?: boolean; overwrite?: boolean }) => {
       const summary = await calc(input, opts);

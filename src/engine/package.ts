@@ -30,7 +30,8 @@ export const MAX_PART_BYTES = 500 * MiB;
 /**
  * Peak resident memory of `fluxbook calc` per row, per cell and per formula cell, bytes, measured
  * on the development machine (Node 20, exceljs 4.4.0, HyperFormula 3.5.0): 1,000,000 rows of one
- * value → 3.3 GB; of two values → 3.9 GB; 100,000 rows of 9 values and 4 XFMR formulas → 2.6 GB.
+ * value → 3.3 GB; of two values → 3.9 GB; 100,000 rows of 9 values and 4 XFMR formulas → 2.6 GB
+ * (checked on 150,000 such rows: 3.84 GB estimated, 3.81 GB measured).
  * Resident memory is more than the heap that Node's limit counts, so the estimate errs on the safe
  * side.
  */
@@ -227,8 +228,8 @@ export async function checkPackage(bytes: Buffer, limits: PackageLimits = defaul
 function checkMemory(c: TagCounter, memoryBytes: number): void {
   const need = estimatedMemory(c);
   if (need <= memoryBytes) return;
-  const formulas = c.formulas === 1 ? '1 formula' : `${count(c.formulas)} formulas`;
+  const some = (n: number, what: string) => `${count(n)} ${what}${n === 1 ? '' : 's'}`;
   throw new WorkbookError(
-    `this workbook is too large to recalculate here: ${count(c.rows)} rows, ${count(c.cells)} cells and ${formulas} need about ${size(need)} of memory, more than the ${size(memoryBytes)} Node.js may use; split the workbook, or allow more with NODE_OPTIONS=--max-old-space-size=MB`,
+    `this workbook is too large to recalculate here: ${some(c.rows, 'row')}, ${some(c.cells, 'cell')} and ${some(c.formulas, 'formula')} need about ${size(need)} of memory, more than the ${size(memoryBytes)} Node.js may use; split the workbook, or allow more with NODE_OPTIONS=--max-old-space-size=MB`,
   );
 }
