@@ -4,11 +4,13 @@ import { join } from 'node:path';
 import { SAFETY_NOTE } from '../cells/metadata';
 import type { FormulaResult, JsonValue } from '../engine/xlsx';
 import { recalculateAndSave } from './calc';
-import { FLEET, FLEET_COLUMNS, fleetWorkbook, YEAR_CELLS, YEAR_UNIT, yearWorkbook } from './fernhill';
+import { BID_CELLS, bidWorkbook, EVALUATION, OFFER_COLUMNS, OFFER_ROW, OFFERS } from './bids';
+import { FLEET, FLEET_COLUMNS, fleetWorkbook, YEAR_CELLS, YEAR_COOLING, YEAR_UNIT, yearWorkbook } from './fernhill';
 import { checkOutput, writeAtomically } from './files';
 
 export const FLEET_FILE = 'fernhill-fleet.xlsx';
 export const YEAR_FILE = 'fernhill-year.xlsx';
+export const BIDS_FILE = 'fernhill-bids.xlsx';
 
 export interface DemoOptions {
   readonly out: string;
@@ -21,6 +23,17 @@ export interface DemoSummary {
   readonly worstEfficiency: { id: string; location: string; efficiency: number };
   readonly energyLostKwh: number;
   readonly allDayEfficiency: number;
+  readonly year: {
+    readonly peakHotSpotC: number;
+    readonly equivalentAging: number;
+    readonly lifeUsedHours: number;
+    readonly lifeFraction: number;
+  };
+  readonly bids: {
+    readonly offers: { name: string; price: number; toc: number; complies: boolean }[];
+    readonly recommended: string;
+    readonly lowestCompliantToc: number;
+  };
   readonly errors: number;
 }
 
@@ -31,16 +44,22 @@ function numberAt(results: FormulaResult[], sheet: string, cell: string): number
   return v;
 }
 
+function valueAt(results: FormulaResult[], sheet: string, cell: string): JsonValue | undefined {
+  return results.find((x) => x.sheet === sheet && x.cell === cell)?.value;
+}
+
 export async function demo(options: DemoOptions): Promise<DemoSummary> {
   await fs.mkdir(options.out, { recursive: true });
   const overwrite = Boolean(options.overwrite);
-  const files = [join(options.out, FLEET_FILE), join(options.out, YEAR_FILE)];
+  const files = [join(options.out, FLEET_FILE), join(options.out, YEAR_FILE), join(options.out, BIDS_FILE)];
   for (const f of files) await checkOutput(f, { overwrite });
 
   const fleet = fleetWorkbook();
   const fleetCalc = await recalculateAndSave(fleet, () => writeAtomically(files[0]!, (tmp) => fleet.xlsx.writeFile(tmp), { overwrite }));
   const year = yearWorkbook();
   const yearCalc = await recalculateAndSave(year, () => writeAtomically(files[1]!, (tmp) => year.xlsx.writeFile(tmp), { overwrite }));
+  const bids = bidWorkbook();
+  const bidCalc = await recalculateAndSave(bids, () => writeAtomically(files[2]!, (tmp) => bids.xlsx.writeFile(tmp), { overwrite }));
 
   const c = FLEET_COLUMNS;
   const rows = FLEET.map((u, i) => ({
@@ -57,11 +76,30 @@ export async function demo(options: DemoOptions): Promise<DemoSummary> {
     worstEfficiency: { id: worst.id, location: worst.location, efficiency: worst.efficiency },
     energyLostKwh: numberAt(yearCalc.results, 'Summary', YEAR_CELLS.energyLost),
     allDayEfficiency: numberAt(yearCalc.results, 'Summary', YEAR_CELLS.allDay),
-    errors: fleetCalc.errors + yearCalc.errors,
+    year: {
+      peakHotSpotC: numberAt(yearCalc.results, 'Summary', YEAR_CELLS.peakHotSpot),
+      equivalentAging: numberAt(yearCalc.results, 'Summary', YEAR_CELLS.equivalentAging),
+      lifeUsedHours: numberAt(yearCalc.results, 'Summary', YEAR_CELLS.lifeUsed),
+      lifeFraction: numberAt(yearCalc.results, 'Summary', YEAR_CELLS.lifeFraction),
+    },
+    bids: {
+      offers: OFFERS.map((o, i) => ({
+        name: o.name,
+        price: o.price,
+        toc: numberAt(bidCalc.results, 'Bids', `${OFFER_COLUMNS.toc}${OFFER_ROW + i}`),
+        complies: valueAt(bidCalc.results, 'Bids', `${OFFER_COLUMNS.complies}${OFFER_ROW + i}`) === true,
+      })),
+      recommended: String(valueAt(bidCalc.results, 'Bids', BID_CELLS.recommended)),
+      lowestCompliantToc: numberAt(bidCalc.results, 'Bids', BID_CELLS.lowestCompliantToc),
+    },
+    errors: fleetCalc.errors + yearCalc.errors + bidCalc.errors,
   };
 }
 
 const pct = (x: number, digits = 2): string => `${(x * 100).toFixed(digits)} %`;
+/** A row of the printout: label, then the value from column 36. */
+const line = (label: string, value: string): string => `  ${label.padEnd(31)}  ${value}`;
+const money = (x: number): string => Math.round(x).toLocaleString('en-US');
 const signedPct = (x: number): string => `${x >= 0 ? '+' : '−'}${Math.abs(x * 100).toFixed(2)} %`;
 
 /** The short table the command prints. */
@@ -74,8 +112,16 @@ export function formatDemoSummary(s: DemoSummary): string {
     ...s.ratioFailures.map((f) => `  ${f.id.padEnd(6)} ${f.location.padEnd(22)} ${signedPct(f.deviation)}`),
     `Worst efficiency at 50 % load:     ${s.worstEfficiency.id} ${s.worstEfficiency.location}, ${pct(s.worstEfficiency.efficiency, 3)}`,
     `${YEAR_UNIT.id} ${YEAR_UNIT.location}, one year of hourly loads:`,
-    `  energy lost                      ${Math.round(s.energyLostKwh).toLocaleString('en-US')} kWh`,
-    `  all-day efficiency               ${pct(s.allDayEfficiency, 3)}`,
+    line('energy lost', `${Math.round(s.energyLostKwh).toLocaleString('en-US')} kWh`),
+    line('all-day efficiency', pct(s.allDayEfficiency, 3)),
+    line(`peak hot-spot (${YEAR_COOLING})`, `${s.year.peakHotSpotC.toFixed(1)} °C`),
+    line('equivalent aging F_EQA', s.year.equivalentAging.toFixed(4)),
+    line('insulation life used', `${s.year.lifeUsedHours.toFixed(1)} h, ${pct(s.year.lifeFraction, 3)} of the normal life`),
+    `Bids for one ${EVALUATION.kva} kVA unit by total owning cost, with the US DOE 2016 check:`,
+    ...s.bids.offers.map((o) =>
+      line(o.name, `TOC ${money(o.toc).padStart(7)}  (price ${money(o.price).padStart(7)})  ${o.complies ? 'meets DOE 2016' : 'FAILS DOE 2016'}`),
+    ),
+    line('recommended', `${s.bids.recommended}, the lowest TOC among compliant offers`),
     '',
     SAFETY_NOTE,
   ];

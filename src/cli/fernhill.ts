@@ -10,6 +10,7 @@ import { uniformFloat64 } from 'pure-rand/distribution/uniformFloat64';
 import { xoroshiro128plus } from 'pure-rand/generator/xoroshiro128plus';
 import { SAFETY_NOTE } from '../cells/metadata';
 import { turnsRatio } from '../core/ratio';
+import { NORMAL_LIFE_HOURS } from '../core/thermal';
 
 export interface FleetUnit {
   readonly id: string;
@@ -60,7 +61,11 @@ export const FLEET: readonly FleetUnit[] = [
 export const YEAR_UNIT = FLEET[2]!;
 export const YEAR_POWER_FACTOR = 0.92;
 export const YEAR_SEED = 20_250_101;
+/** A seed of its own, so the loads stay the same year whether or not the weather is drawn. */
+export const AMBIENT_SEED = 20_250_102;
 export const HOURS = 8760;
+/** The cooling the year's thermal formulas name: a pad-mounted unit, oil natural, air natural. */
+export const YEAR_COOLING = 'ONAN';
 const YEAR_START = Date.UTC(2025, 0, 1); // a Wednesday
 
 /** What a turns-ratio test set would show: three decimals. */
@@ -97,9 +102,35 @@ export function yearOfLoads(seed = YEAR_SEED): Float64Array {
   return loads;
 }
 
+/**
+ * A year of hourly air temperatures for a temperate inland campus, °C: a mean of 11 °C, seasons of
+ * ±8.5 K peaking in late July, a daily swing of ±3 K in winter to ±5.5 K in summer with the warmest
+ * hour at 15 h, and weather — spells a few days long — as a first-order autoregressive drift
+ * (each hour keeps 99 % of the last hour's departure; about ±2.4 K standard deviation) plus ±0.3 K
+ * noise, from a seeded generator (pure-rand xoroshiro128+). Invented: no real site's record. The
+ * figures are of the kind a temperate climate has (common practice); the seeded year runs from
+ * −4.6 to 28.4 °C with a mean of 10.4 °C.
+ */
+export function yearOfAmbients(seed = AMBIENT_SEED): Float64Array {
+  const rng = xoroshiro128plus(seed);
+  const ambients = new Float64Array(HOURS);
+  let weather = 0;
+  for (let h = 0; h < HOURS; h++) {
+    const day = Math.floor(h / 24);
+    const hour = h % 24;
+    const season = Math.cos((2 * Math.PI * (day - 200)) / 365); // 1 on 20 July, −1 in mid January
+    const swing = 4.25 + 1.25 * season;
+    const daily = swing * Math.cos((2 * Math.PI * (hour - 15)) / 24);
+    weather = 0.99 * weather + (uniformFloat64(rng) - 0.5) * 1.2;
+    const noise = (uniformFloat64(rng) - 0.5) * 0.6;
+    ambients[h] = Math.round((11 + 8.5 * season + daily + weather + noise) * 10) / 10;
+  }
+  return ambients;
+}
+
 export const hourStart = (h: number): Date => new Date(YEAR_START + h * 3_600_000);
 
-const INVENTED = 'Fernhill Works is fictional; every unit, reading and load here is invented demo data.';
+export const INVENTED = 'Fernhill Works is fictional; every unit, reading, load and temperature here is invented demo data.';
 
 function header(ws: ExcelJS.Worksheet, labels: readonly string[]): void {
   const row = ws.getRow(1);
@@ -207,25 +238,51 @@ export function fleetWorkbook(): ExcelJS.Workbook {
 }
 
 /** Cells of the year workbook's summary, named once so formulas and readers agree. */
-export const YEAR_CELLS = { energyLost: 'B8', energyOut: 'B9', allDay: 'B10' } as const;
+export const YEAR_CELLS = {
+  energyLost: 'B8',
+  energyOut: 'B9',
+  allDay: 'B10',
+  hottestAmbient: 'B17',
+  peakHotSpot: 'B18',
+  equivalentAging: 'B19',
+  lifeUsed: 'B20',
+  normalLife: 'B21',
+  lifeFraction: 'B22',
+  maxLoadHottest: 'B23',
+} as const;
 
-export function yearWorkbook(loads: Float64Array = yearOfLoads()): ExcelJS.Workbook {
+/** Columns of the year's profile sheet; the hot-spot column is one XFMR.HOTSPOTS spill from row 2. */
+export const PROFILE_COLUMNS = { hour: 'A', load: 'B', ambient: 'C', hotSpot: 'D' } as const;
+
+export function yearWorkbook(loads: Float64Array = yearOfLoads(), ambients: Float64Array = yearOfAmbients()): ExcelJS.Workbook {
+  if (ambients.length !== loads.length) throw new Error(`yearWorkbook: ${loads.length} loads but ${ambients.length} ambients`);
   const wb = new ExcelJS.Workbook();
   wb.creator = 'Fluxbook demo';
   wb.title = `Fernhill Works ${YEAR_UNIT.id}, a year of hourly loading`;
   const summary = wb.addWorksheet('Summary');
   const profile = wb.addWorksheet('Profile');
-  header(profile, ['Hour starting (UTC)', 'Load (per unit)']);
+  header(profile, ['Hour starting (UTC)', 'Load (per unit)', 'Ambient (°C)', 'Hot-spot at the end of the hour (°C)']);
   for (let h = 0; h < loads.length; h++) {
     const r = profile.getRow(h + 2);
     r.getCell(1).value = hourStart(h);
     r.getCell(2).value = loads[h]!;
+    r.getCell(3).value = ambients[h]!;
   }
+  const p = PROFILE_COLUMNS;
+  const last = loads.length + 1;
+  const range = `Profile!${p.load}2:${p.load}${last}`;
+  const ambientRange = `Profile!${p.ambient}2:${p.ambient}${last}`;
+  const cooling = `"${YEAR_COOLING}"`;
+  // One formula spills the whole column of hot-spots (8,760 rows), for a chart beside the loads.
+  profile.getCell(`${p.hotSpot}2`).value = { formula: `XFMR.HOTSPOTS(${p.load}2:${p.load}${last},${p.ambient}2:${p.ambient}${last},1,${cooling})` };
   profile.getColumn(1).numFmt = 'yyyy-mm-dd hh:mm';
   profile.getColumn(1).width = 20;
   profile.getColumn(2).width = 16;
+  profile.getColumn(3).width = 14;
+  profile.getColumn(4).width = 22;
+  profile.getColumn(4).numFmt = '0.0';
 
-  const range = `Profile!B2:B${loads.length + 1}`;
+  const c = YEAR_CELLS;
   const rows: [string, ExcelJS.CellValue?, string?][] = [
     ['Unit', `${YEAR_UNIT.id} ${YEAR_UNIT.location}`],
     ['Rating (kVA)', YEAR_UNIT.kva],
@@ -242,6 +299,14 @@ export function yearWorkbook(loads: Float64Array = yearOfLoads()): ExcelJS.Workb
     ['Loss factor estimated from the load factor', { formula: 'XFMR.LSF(B11)' }, '0.000'],
     ['Peak load (per unit)', { formula: `MAX(${range})` }, '0.000'],
     ['Efficiency at the mean load', { formula: `XFMR.EFF(B2,B3,B4,AVERAGE(${range}),B5)` }, '0.00%'],
+    [`Insulation aging, ${YEAR_COOLING} with the cooling table's thermal data, thermally upgraded paper`],
+    ['Hottest ambient of the year (°C)', { formula: `MAX(${ambientRange})` }, '0.0'],
+    ['Peak hot-spot of the year (°C)', { formula: `MAX(Profile!${p.hotSpot}2:${p.hotSpot}${last})` }, '0.0'],
+    ['Equivalent aging factor F_EQA', { formula: `XFMR.FEQA(${range},${ambientRange},1,${cooling})` }, '0.0000'],
+    ['Life used in the year (h of normal aging)', { formula: `XFMR.LIFEUSED(${range},${ambientRange},1,${cooling})` }, '#,##0.0'],
+    ['Normal insulation life (h)', NORMAL_LIFE_HOURS, '#,##0'],
+    ['Fraction of the normal life used', { formula: `${c.lifeUsed}/${c.normalLife}` }, '0.000%'],
+    ['Largest steady load at the hottest ambient, 110 °C hot-spot (per unit)', { formula: `XFMR.MAXLOAD(${c.hottestAmbient},110,${cooling})` }, '0.000'],
     [''],
     [INVENTED],
     [SAFETY_NOTE],

@@ -6,6 +6,7 @@
 import { randomBytes } from 'node:crypto';
 import { promises as fs, constants as fsc, unlinkSync } from 'node:fs';
 import { basename, dirname, join, resolve } from 'node:path';
+import { MAX_UNPACKED_BYTES } from '../engine/package';
 
 /** A refusal the user can act on: printed as one line, exit code 2. */
 export class UsageError extends Error {
@@ -27,6 +28,11 @@ export async function readInput(path: string): Promise<Buffer> {
   try {
     const stat = await fs.stat(path);
     if (stat.isDirectory()) throw new UsageError(`${path}: is a folder, not a workbook`);
+    // Parts are stored or deflated, never much larger packed than unpacked: a file beyond the
+    // unpacked limit cannot hold a workbook Fluxbook would read, so it is not read at all.
+    if (stat.size > MAX_UNPACKED_BYTES) {
+      throw new UsageError(`${path}: is ${(stat.size / 2 ** 30).toFixed(1)} GiB; Fluxbook reads workbooks of up to ${MAX_UNPACKED_BYTES / 2 ** 30} GiB unpacked`);
+    }
     return await fs.readFile(path);
   } catch (error) {
     if (error instanceof UsageError) throw error;

@@ -5,11 +5,24 @@
  */
 import { Command, CommanderError } from 'commander';
 import { SAFETY_NOTE } from '../cells/metadata';
+import type { FormulaResult } from '../engine/xlsx';
 import { calc } from './calc';
 import { demo, formatDemoSummary } from './demo';
 import { UsageError } from './files';
 
 const VERSION = '0.1.0';
+
+/** What the error values of a run are, where two kinds say more than a count: cycles and unknown names. */
+function errorKinds(results: FormulaResult[]): string {
+  const code = (r: FormulaResult) => (r.value !== null && typeof r.value === 'object' ? r.value.error : undefined);
+  const cycles = results.filter((r) => code(r) === '#CYCLE!').length;
+  const names = results.filter((r) => code(r) === '#NAME?').length;
+  const kinds = [
+    cycles > 0 ? `${cycles} in a circular reference (#CYCLE!, stored as #VALUE!)` : '',
+    names > 0 ? `${names} naming a function that does not exist (#NAME?)` : '',
+  ].filter(Boolean);
+  return kinds.length > 0 ? ` (${kinds.join('; ')}; --json shows each)` : '';
+}
 
 function program(): Command {
   const p = new Command('fluxbook')
@@ -35,14 +48,17 @@ function program(): Command {
         'add-in loads and for other spreadsheets. A spilled result is stored as an array formula over\n' +
         'its range. The output is written to a temporary file beside it and renamed when complete.\n' +
         'A progress bar appears on stderr for workbooks of more than 50,000 formulas or a profile\n' +
-        'longer than 8,760 steps, when stderr is a terminal.',
+        'longer than 8,760 steps, when stderr is a terminal.\n' +
+        'Refused before reading (exit 2): a package cut short, one that would unpack to more than\n' +
+        '1 GiB (500 MiB a part) or unpacks past what it declares, and a workbook too large for the\n' +
+        'memory Node.js may use (NODE_OPTIONS=--max-old-space-size=MB allows more).',
     )
     .action(async (input: string, opts: { out: string; json?: boolean; overwrite?: boolean }) => {
       const summary = await calc(input, opts);
       if (opts.json) {
         process.stdout.write(`${JSON.stringify(summary.results, null, 1)}\n`);
       } else {
-        const errors = summary.errors === 0 ? 'no errors' : `${summary.errors} with an error value`;
+        const errors = summary.errors === 0 ? 'no errors' : `${summary.errors} with an error value${errorKinds(summary.results)}`;
         process.stdout.write(`${opts.out}: ${summary.formulas} formulas recalculated (${summary.ours} with XFMR functions), ${errors}\n`);
       }
     });

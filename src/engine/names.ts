@@ -67,11 +67,21 @@ const STORED_CALL = /(?<![\w.])_xldudf_([A-Za-z0-9_]+)(?=\s*\()/gi;
 const FUTURE_PREFIX = /(?<![\w.])_xlfn\.(?:_xlws\.)?(?=[A-Za-z])/gi;
 const PLAIN_CALL = new RegExp(`(?<![\\w.])${NAMESPACE}\\.([A-Za-z0-9_.]+)(?=\\s*\\()`, 'gi');
 
+/**
+ * An `_xldudf_XFMR_…` name the catalog does not have, as the engine's `XFMR.…`, so it shows #NAME?
+ * ("Function name XFMR.NOSUCH not recognized") rather than failing to parse: the engine's names
+ * may not start with "_". The stored formula is written back as it was read.
+ */
+function unknownOfOurs(rest: string): string | undefined {
+  const prefix = `${NAMESPACE}_`;
+  return rest.toUpperCase().startsWith(prefix) && rest.length > prefix.length ? `${NAMESPACE}.${rest.slice(prefix.length).toUpperCase()}` : undefined;
+}
+
 /** The formula as the engine reads it: our stored names back to XFMR.NAME, `_xlfn.` dropped. */
 export function toEngineFormula(stored: string): string {
   return outsideQuotes(stored, (code) =>
     code
-      .replace(STORED_CALL, (whole, rest: string) => byStoredName.get(`_XLDUDF_${rest.toUpperCase()}`) ?? whole)
+      .replace(STORED_CALL, (whole, rest: string) => byStoredName.get(`_XLDUDF_${rest.toUpperCase()}`) ?? unknownOfOurs(rest) ?? whole)
       .replace(FUTURE_PREFIX, '')
       .replace(PLAIN_CALL, (whole, rest: string) => (byFormulaName.has(`${NAMESPACE}.${rest.toUpperCase()}`) ? `${NAMESPACE}.${rest.toUpperCase()}` : whole)),
   );

@@ -18,17 +18,19 @@ import ExcelJS from 'exceljs';
 import { DetailedCellError, type HyperFormula, type RawCellContent, type SerializedNamedExpression } from 'hyperformula';
 import { arraySize, createEngine } from './engine';
 import { callsOurFunctions, toEngineFormula, toStoredFormula } from './names';
+import { checkPackage, WorkbookError, type PackageLimits } from './package';
 
-/** A workbook that cannot be read: the message is one line a person can act on. */
-export class WorkbookError extends Error {
-  override name = 'WorkbookError';
-}
+export { WorkbookError } from './package';
 
 const ZIP_MAGIC = Buffer.from([0x50, 0x4b, 0x03, 0x04]);
 const OLE_MAGIC = Buffer.from([0xd0, 0xcf, 0x11, 0xe0]); // .xls, and .xlsx protected by a password
 
-/** Loads .xlsx bytes, or throws WorkbookError saying why they are not a workbook. */
-export async function loadWorkbook(bytes: Buffer): Promise<ExcelJS.Workbook> {
+/**
+ * Loads .xlsx bytes, or throws WorkbookError saying why they are not a workbook; the package is
+ * checked first (package.ts) so that a damaged, crafted or oversized one is refused before exceljs
+ * unpacks it.
+ */
+export async function loadWorkbook(bytes: Buffer, limits?: PackageLimits): Promise<ExcelJS.Workbook> {
   if (bytes.length === 0) throw new WorkbookError('the file is empty');
   if (bytes.subarray(0, 4).equals(OLE_MAGIC)) {
     throw new WorkbookError('this is an old .xls workbook or a password-protected one; save it as .xlsx without a password');
@@ -36,6 +38,7 @@ export async function loadWorkbook(bytes: Buffer): Promise<ExcelJS.Workbook> {
   if (!bytes.subarray(0, 4).equals(ZIP_MAGIC)) {
     throw new WorkbookError('this is not an .xlsx workbook (an .xlsx file is a ZIP package; is it a CSV or text file renamed .xlsx?)');
   }
+  await checkPackage(bytes, limits);
   const workbook = new ExcelJS.Workbook();
   try {
     await workbook.xlsx.load(bytes as unknown as ExcelJS.Buffer);
@@ -194,8 +197,17 @@ export interface FormulaResult {
   spill?: { ref: string; values: JsonValue[][] };
 }
 
+/** HyperFormula gives a cycle no message: say what it is and where it runs through. */
+function cycleMessage(v: DetailedCellError): string {
+  const through = v.address ? ` through ${v.address}` : '';
+  return `circular reference${through}: a formula in the cycle needs its own result, so it has no value; break the cycle`;
+}
+
 function jsonValue(v: unknown): JsonValue {
-  if (v instanceof DetailedCellError) return v.message ? { error: v.value, message: v.message } : { error: v.value };
+  if (v instanceof DetailedCellError) {
+    if (v.value === '#CYCLE!' && !v.message) return { error: v.value, message: cycleMessage(v) };
+    return v.message ? { error: v.value, message: v.message } : { error: v.value };
+  }
   if (v === undefined) return null;
   return v as JsonValue;
 }

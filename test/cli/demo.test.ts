@@ -11,8 +11,13 @@ import { pathToFileURL } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { adapt, plainErrors } from '../../src/cells/adapter';
 import { findFunction } from '../../src/cells/catalog';
-import { demo, FLEET_FILE, formatDemoSummary, YEAR_FILE, type DemoSummary } from '../../src/cli/demo';
-import { FLEET, FLEET_COLUMNS, HOURS, YEAR_UNIT, yearOfLoads } from '../../src/cli/fernhill';
+import ExcelJS from 'exceljs';
+import { BID_CELLS, EVALUATION, OFFER_COLUMNS, OFFER_ROW, OFFERS } from '../../src/cli/bids';
+import { BIDS_FILE, demo, FLEET_FILE, formatDemoSummary, YEAR_FILE, type DemoSummary } from '../../src/cli/demo';
+import { FLEET, FLEET_COLUMNS, HOURS, PROFILE_COLUMNS, YEAR_CELLS, YEAR_UNIT, yearOfAmbients, yearOfLoads } from '../../src/cli/fernhill';
+import { loadLossWorth, noLoadLossWorth, totalOwningCost } from '../../src/core/cost';
+import { doeMinimumEfficiency, meetsEfficiencyRule } from '../../src/core/efficiencyRules';
+import { loadingYear, maxLoadForHotSpot } from '../../src/core/thermal';
 import { loadWorkbook, recalculate, type FormulaResult } from '../../src/engine/xlsx';
 import { fluxbook } from './run';
 
@@ -60,8 +65,24 @@ describe('the Fernhill Works demo', () => {
     expect(Math.min(...a)).toBeGreaterThanOrEqual(0.05);
   });
 
-  it('writes two workbooks whose formulas compute without an error', async () => {
-    expect(summary.files).toEqual([join(dir, FLEET_FILE), join(dir, YEAR_FILE)]);
+  it('draws the same temperate year of hourly ambients every time: seasons, afternoons warmer than nights', () => {
+    const a = yearOfAmbients();
+    expect(a).toEqual(yearOfAmbients());
+    expect(a).toHaveLength(HOURS);
+    expect(yearOfAmbients(1)).not.toEqual(a);
+    const mean = (xs: ArrayLike<number>) => Array.from(xs).reduce((s, x) => s + x, 0) / xs.length;
+    // common practice: a temperate inland year, a mean near 10 °C, rarely below −15 or above 35 °C
+    expect(mean(a)).toBeGreaterThan(8);
+    expect(mean(a)).toBeLessThan(13);
+    expect(Math.min(...a)).toBeGreaterThan(-15);
+    expect(Math.max(...a)).toBeLessThan(35);
+    expect(mean(a.slice(181 * 24, 212 * 24))).toBeGreaterThan(mean(a.slice(0, 31 * 24)) + 10); // July vs January
+    const atHour = (hour: number) => mean(Array.from({ length: 365 }, (_, d) => a[d * 24 + hour]!));
+    expect(atHour(15)).toBeGreaterThan(atHour(3) + 5);
+  });
+
+  it('writes three workbooks whose formulas compute without an error', async () => {
+    expect(summary.files).toEqual([join(dir, FLEET_FILE), join(dir, YEAR_FILE), join(dir, BIDS_FILE)]);
     expect(summary.errors).toBe(0);
     for (const f of summary.files) {
       const results = recalculate(await loadWorkbook(readFileSync(f)));
@@ -81,6 +102,80 @@ describe('the Fernhill Works demo', () => {
     expect(text).toMatch(/2 of 14 units fail/);
     expect(text).toMatch(/FH-04/);
     expect(text).toMatch(/verify with a qualified engineer/);
+  });
+
+  it('the year’s hot-spot, aging and life used are those of the thermal core on the same loads and ambients', async () => {
+    const loads = yearOfLoads();
+    const ambients = yearOfAmbients();
+    const core = loadingYear(loads, ambients, { cooling: 'ONAN' });
+    expect(summary.year.peakHotSpotC).toBeCloseTo(core.peakHotSpot, 10);
+    expect(summary.year.equivalentAging).toBeCloseTo(core.equivalentAging, 14);
+    expect(summary.year.lifeUsedHours).toBeCloseTo(core.lifeUsedHours, 9);
+    expect(summary.year.lifeFraction).toBeCloseTo(core.lifeFraction, 15);
+    expect(summary.year.lifeFraction).toBeCloseTo(core.lifeUsedHours / 180_000, 15);
+    // A lightly loaded unit in a temperate climate ages far slower than at a steady 110 °C.
+    expect(summary.year.equivalentAging).toBeLessThan(0.1);
+
+    // The 8,760-row spill is in the file: an array formula over the column, every value stored.
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.readFile(summary.files[1]!);
+    const profile = wb.getWorksheet('Profile')!;
+    const p = PROFILE_COLUMNS;
+    const anchor = profile.getCell(`${p.hotSpot}2`).value as { formula: string; ref: string; shareType: string };
+    expect(anchor.formula).toBe(`_xldudf_XFMR_HOTSPOTS(B2:B${HOURS + 1},C2:C${HOURS + 1},1,"ONAN")`);
+    expect(anchor).toMatchObject({ shareType: 'array', ref: `${p.hotSpot}2:${p.hotSpot}${HOURS + 1}` });
+    for (const h of [0, 1, 4000, HOURS - 1]) expect(profile.getCell(`${p.hotSpot}${h + 2}`).result ?? profile.getCell(`${p.hotSpot}${h + 2}`).value).toBeCloseTo(core.hotSpots[h]!, 10);
+    expect(profile.getCell(`${p.hotSpot}${HOURS + 2}`).value).toBeNull();
+
+    const results = recalculate(await loadWorkbook(readFileSync(summary.files[1]!)));
+    const at = (cell: string) => results.find((r) => r.sheet === 'Summary' && r.cell === cell)!.value as number;
+    const hottest = Math.max(...ambients);
+    expect(at(YEAR_CELLS.hottestAmbient)).toBe(hottest);
+    expect(at(YEAR_CELLS.maxLoadHottest)).toBeCloseTo(maxLoadForHotSpot(hottest, 110, 'ONAN', undefined, undefined, undefined, 'IEEE'), 12);
+  });
+
+  it('the bid sheet: each TOC is the cost core’s, the offer below the DOE 2016 minimum is flagged, the lowest compliant TOC wins', async () => {
+    const e = EVALUATION;
+    const a = noLoadLossWorth(e.priceKwh, e.rate, e.years, 8760);
+    const b = loadLossWorth(e.priceKwh, e.lossFactor, e.peakLoad, e.rate, e.years, 8760);
+    const expected = OFFERS.map((o) => ({
+      name: o.name,
+      price: o.price,
+      toc: totalOwningCost(o.price, o.p0W, o.pkW, a, b),
+      complies: meetsEfficiencyRule(e.kva, o.p0W, o.pkW, 'DOE', 'liquid', 3, 2016, undefined),
+    }));
+    summary.bids.offers.forEach((o, i) => {
+      expect(o.name).toBe(expected[i]!.name);
+      expect(o.toc).toBeCloseTo(expected[i]!.toc, 8);
+      expect(o.complies).toBe(expected[i]!.complies);
+    });
+    // Offer B: 980 W + 9,800 W/4 at half load is 99.32 % efficient, below the 99.43 % of
+    // 10 CFR 431.196 (a)(2) for a 1000 kVA three-phase liquid-immersed unit.
+    expect(doeMinimumEfficiency(1000, 'liquid', 3, 2016, undefined)).toBeCloseTo(0.9943, 15);
+    const offerB = 500_000 / (500_000 + 980 + 9_800 / 4);
+    expect(offerB).toBeCloseTo(0.99319, 5);
+    expect(offerB).toBeLessThan(0.9943);
+    expect(summary.bids.offers.map((o) => o.complies)).toEqual([true, false, true]);
+    const byToc = [...expected].sort((x, y) => x.toc - y.toc);
+    expect(byToc.at(-1)!.name).toBe('Offer B'); // cheapest to buy, dearest to own
+    expect(Math.min(...OFFERS.map((o) => o.price))).toBe(OFFERS[1]!.price);
+    const best = expected.filter((o) => o.complies).reduce((x, y) => (y.toc < x.toc ? y : x));
+    expect(summary.bids.recommended).toBe(best.name);
+    expect(summary.bids.recommended).toBe('Offer A');
+    expect(summary.bids.lowestCompliantToc).toBeCloseTo(best.toc, 8);
+
+    const results = recalculate(await loadWorkbook(readFileSync(summary.files[2]!)));
+    const at = (cell: string) => results.find((r) => r.sheet === 'Bids' && r.cell === cell)?.value;
+    expect(at(BID_CELLS.aFactor)).toBeCloseTo(a, 12);
+    expect(at(BID_CELLS.bFactor)).toBeCloseTo(b, 12);
+    expect(at(`${OFFER_COLUMNS.complies}${OFFER_ROW + 1}`)).toBe(false);
+    expect(at(`${OFFER_COLUMNS.compliantToc}${OFFER_ROW + 1}`)).toBe('fails DOE 2016');
+    expect(at(BID_CELLS.cheapestToBuy)).toBe('Offer B');
+
+    const text = formatDemoSummary(summary);
+    expect(text).toMatch(/Offer B .* FAILS DOE 2016/);
+    expect(text).toMatch(/recommended +Offer A/);
+    expect(text).toMatch(/peak hot-spot \(ONAN\) +\d+\.\d °C/);
   });
 
   it('refuses to write over its workbooks without --overwrite, and replaces them with it', () => {
@@ -141,7 +236,7 @@ describe.runIf(hasSoffice || process.env.CI)('the demo workbooks in LibreOffice'
     });
     const base = file.split('/').pop()!.replace(/\.xlsx$/, '');
     const sheets: Record<string, string[][]> = {};
-    for (const name of ['Fleet', 'Curve', 'Summary', 'Profile']) {
+    for (const name of ['Fleet', 'Curve', 'Summary', 'Profile', 'Bids']) {
       const path = join(out, `${base}-${name}.csv`);
       if (existsSync(path)) sheets[name] = csvRows(readFileSync(path, 'utf8'));
     }
@@ -170,10 +265,23 @@ describe.runIf(hasSoffice || process.env.CI)('the demo workbooks in LibreOffice'
     expect(checked).toBe(7 * 14);
   });
 
-  it('shows the year’s energy lost and all-day efficiency Fluxbook computed', () => {
+  it('shows the year’s energy lost, all-day efficiency, peak hot-spot, F_EQA and life used Fluxbook computed', () => {
     const csv = toCsv(summary.files[1]!).Summary!;
     const byLabel = Object.fromEntries(csv.map((r) => [r[0], r[1]]));
     expect(csvNumber(byLabel['Energy lost in the year (kWh)']!)).toBeCloseTo(summary.energyLostKwh, 6);
     expect(csvNumber(byLabel['All-day efficiency']!)).toBeCloseTo(summary.allDayEfficiency, 12);
+    // MAX over the spilled hot-spots keeps its stored number, though the spill itself shows #NAME?.
+    expect(csvNumber(byLabel['Peak hot-spot of the year (°C)']!)).toBeCloseTo(summary.year.peakHotSpotC, 10);
+    expect(csvNumber(byLabel['Equivalent aging factor F_EQA']!)).toBeCloseTo(summary.year.equivalentAging, 14);
+    expect(csvNumber(byLabel['Life used in the year (h of normal aging)']!)).toBeCloseTo(summary.year.lifeUsedHours, 10);
+  });
+
+  it('shows each offer’s total owning cost and the recommended offer Fluxbook computed', () => {
+    const csv = toCsv(summary.files[2]!).Bids!;
+    const byLabel = Object.fromEntries(csv.map((r) => [r[0], r]));
+    const toc = colIndex(OFFER_COLUMNS.toc);
+    for (const o of summary.bids.offers) expect(csvNumber(byLabel[o.name]![toc]!)).toBeCloseTo(o.toc, 8);
+    expect(byLabel['Recommended offer']![1]).toBe(summary.bids.recommended);
+    expect(csvNumber(byLabel['Lowest total owning cost among compliant offers']![1]!)).toBeCloseTo(summary.bids.lowestCompliantToc, 8);
   });
 });

@@ -12,8 +12,14 @@ export interface Run {
 }
 
 export function fluxbook(...args: string[]): Run {
-  const r = spawnSync(process.execPath, ['--import', 'tsx', ENTRY, ...args], { cwd: ROOT, encoding: 'utf8', timeout: 120_000 });
-  return { status: r.status, stdout: r.stdout, stderr: r.stderr };
+  return fluxbookWith({}, ...args);
+}
+
+/** The same with more environment variables, e.g. NODE_OPTIONS to give the run a smaller heap. */
+export function fluxbookWith(env: Record<string, string>, ...args: string[]): Run & { seconds: number } {
+  const start = process.hrtime.bigint();
+  const r = spawnSync(process.execPath, ['--import', 'tsx', ENTRY, ...args], { cwd: ROOT, encoding: 'utf8', timeout: 120_000, env: { ...process.env, ...env } });
+  return { status: r.status, stdout: r.stdout, stderr: r.stderr, seconds: Number(process.hrtime.bigint() - start) / 1e9 };
 }
 
 export function fluxbookAsync(...args: string[]) {
