@@ -161,10 +161,8 @@ function refusal(error: unknown, makeError: ErrorFactory): unknown {
   throw error; // a programmer mistake: let the tests see it
 }
 
-const NOT_FINITE = 'the result is not a finite number';
-
 function resultCell(value: Scalar, makeError: ErrorFactory): unknown {
-  if (typeof value === 'number' && !Number.isFinite(value)) return makeError('NUM', NOT_FINITE);
+  if (typeof value === 'number' && !Number.isFinite(value)) return makeError('NUM', 'the result is not a finite number');
   return value;
 }
 
@@ -279,8 +277,7 @@ function runEach(
       buf[a.k] = c.value;
     }
     try {
-      const r = call(buf);
-      return typeof r === 'number' && r - r !== 0 ? makeError('NUM', NOT_FINITE) : r;
+      return resultCell(call(buf), makeError);
     } catch (error) {
       return refusal(error, makeError);
     }
