@@ -36,6 +36,7 @@ import {
 import { adapt, type CellFunction, type ErrorKind } from '../cells/adapter';
 import { catalog, NAMESPACE } from '../cells/catalog';
 import type { CellFunctionDecl } from '../cells/declaration';
+import { formulaVertex, type PluginInternals, type State } from './internals';
 
 const ERROR_TYPE: Record<ErrorKind, ErrorType> = { VALUE: ErrorType.VALUE, NUM: ErrorType.NUM, NA: ErrorType.NA };
 
@@ -94,14 +95,7 @@ function toAdapterArgument(v: unknown): unknown {
   return toAdapterScalar(v);
 }
 
-type State = { formulaAddress: SimpleCellAddress; arraysFlag: boolean; formulaVertex?: unknown };
 type Ast = { args: unknown[] };
-interface PluginInternals {
-  evaluateAst(ast: unknown, state: State): unknown;
-  arraySizeForAst(ast: unknown, state: State): ArraySize;
-  runFunction(args: unknown[], state: State, metadata: FunctionMetadata, fn: (...a: unknown[]) => unknown): unknown;
-  dependencyGraph: { getCell(address: SimpleCellAddress): unknown };
-}
 
 /** The formula itself under ARRAYFORMULA(…) and parentheses, which do not change a result's size. */
 function unwrapped(ast: unknown): unknown {
@@ -115,11 +109,9 @@ function unwrapped(ast: unknown): unknown {
 
 /** The room HyperFormula reserved for the formula whose root is `ast`, or undefined when nested. */
 function reservedSize(plugin: PluginInternals, ast: unknown, address: SimpleCellAddress): { rows: number; cols: number } | undefined {
-  const vertex = plugin.dependencyGraph.getCell(address) as { formula?: unknown; width?: number; height?: number } | undefined;
+  const vertex = formulaVertex(plugin, address);
   if (vertex === undefined || unwrapped(vertex.formula) !== ast) return undefined;
-  return typeof vertex.width === 'number' && typeof vertex.height === 'number'
-    ? { rows: vertex.height, cols: vertex.width }
-    : { rows: 1, cols: 1 };
+  return { rows: vertex.rows, cols: vertex.cols };
 }
 
 function toHyperFormula(result: unknown[][]): unknown {

@@ -29,7 +29,7 @@ for (const decl of catalog) {
 }
 
 /** Runs `edit` on the parts of a formula outside "string literals" and 'quoted sheet names'. */
-function outsideQuotes(formula: string, edit: (code: string) => string): string {
+export function outsideQuotes(formula: string, edit: (code: string) => string): string {
   let out = '';
   let i = 0;
   while (i < formula.length) {

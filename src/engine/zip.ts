@@ -1,0 +1,150 @@
+/**
+ * The ZIP container of an .xlsx package (ECMA-376 Part 2, Open Packaging Conventions, which uses
+ * the PKWARE .ZIP format): read with yauzl, written with fflate.
+ *
+ *  - yauzl reads the central directory and each entry's raw (still compressed) bytes, and while it
+ *    unpacks an entry it stops with an error once the entry yields more bytes than its directory
+ *    entry declares, so a part that lies about its size never fills memory.
+ *  - fflate writes the new package. A part that is not changed goes in as the very bytes it had,
+ *    still compressed, with the CRC-32 and sizes from the old directory (fflate's ZipInputFile
+ *    takes already compressed data); a changed part is deflated with Node's zlib.
+ */
+import { crc32, deflateRawSync } from 'node:zlib';
+import { Zip, type ZipInputFile } from 'fflate';
+import yauzl from 'yauzl';
+import { zipError } from './package';
+
+/** One entry of a ZIP package as read. */
+export interface ZipEntry {
+  readonly name: string;
+  /** 0 stored, 8 deflated (APPNOTE.TXT 4.4.5). */
+  readonly method: number;
+  readonly crc: number;
+  readonly compressedSize: number;
+  /** As the central directory declares it. */
+  readonly size: number;
+  readonly isFolder: boolean;
+  readonly entry: yauzl.Entry;
+}
+
+export interface ZipReader {
+  readonly entries: readonly ZipEntry[];
+  /** The raw bytes of an entry, as stored in the package (compressed). */
+  raw(entry: ZipEntry): Promise<Buffer>;
+  /** Unpacks an entry chunk by chunk; yauzl fails once it yields more than it declares. */
+  stream(entry: ZipEntry, onChunk: (chunk: Buffer) => void): Promise<void>;
+  close(): void;
+}
+
+const collect = (stream: NodeJS.ReadableStream, onChunk: (chunk: Buffer) => void): Promise<void> =>
+  new Promise((resolve, reject) => {
+    stream.on('data', (chunk: Buffer) => {
+      try {
+        onChunk(chunk);
+      } catch (error) {
+        (stream as unknown as { destroy(e?: unknown): void }).destroy();
+        reject(error);
+      }
+    });
+    stream.on('error', reject);
+    stream.on('end', () => resolve());
+  });
+
+/** Opens a package held in memory and reads its central directory. */
+export async function openZip(bytes: Buffer): Promise<ZipReader> {
+  let zip: yauzl.ZipFile;
+  try {
+    zip = await yauzl.fromBufferPromise(bytes, { lazyEntries: true, validateEntrySizes: true, strictFileNames: false, decodeStrings: true });
+  } catch (error) {
+    throw zipError(error);
+  }
+  const entries: ZipEntry[] = [];
+  await new Promise<void>((resolve, reject) => {
+    zip.on('entry', (entry: yauzl.Entry) => {
+      entries.push({
+        name: entry.fileName,
+        method: entry.compressionMethod,
+        crc: entry.crc32,
+        compressedSize: entry.compressedSize,
+        size: entry.uncompressedSize,
+        isFolder: entry.fileName.endsWith('/'),
+        entry,
+      });
+      zip.readEntry();
+    });
+    zip.on('end', () => resolve());
+    zip.on('error', (error) => reject(zipError(error)));
+    zip.readEntry();
+  });
+  const open = (entry: ZipEntry, decompress: boolean) =>
+    zip.openReadStreamPromise(entry.entry, entry.method === 0 ? {} : { decompress }) as Promise<NodeJS.ReadableStream>;
+  return {
+    entries,
+    async raw(entry) {
+      const chunks: Buffer[] = [];
+      try {
+        await collect(await open(entry, false), (c) => chunks.push(c));
+      } catch (error) {
+        throw zipError(error, entry.name);
+      }
+      return Buffer.concat(chunks);
+    },
+    async stream(entry, onChunk) {
+      try {
+        await collect(await open(entry, true), onChunk);
+      } catch (error) {
+        throw zipError(error, entry.name);
+      }
+    },
+    close: () => zip.close(),
+  };
+}
+
+/** An entry of the new package: copied as it was, or new content. */
+export type OutEntry =
+  | { readonly name: string; readonly copy: ZipEntry; readonly raw: Buffer }
+  | { readonly name: string; readonly content: Uint8Array };
+
+/** A part that goes in already compressed, exactly as it was stored. */
+function copiedFile(name: string, method: number, crc: number, size: number, data: Uint8Array): ZipInputFile {
+  const file: ZipInputFile = {
+    filename: name,
+    size,
+    crc,
+    compression: method,
+    // The DOS time is not carried over: the parts' bytes are what the package holds.
+    mtime: new Date(1980, 0, 1),
+    ondata: undefined,
+  };
+  // fflate sets ondata when the file is added; the data is then handed over in one piece.
+  const start = () => file.ondata?.(null, new Uint8Array(data.buffer as ArrayBuffer, data.byteOffset, data.length), true);
+  return Object.assign(file, { start });
+}
+
+/** Writes a ZIP package of `entries` in the order given. */
+export function writeZip(entries: readonly OutEntry[]): Promise<Buffer> {
+  return new Promise((resolve, reject) => {
+    const chunks: Uint8Array[] = [];
+    const zip = new Zip((error, chunk, final) => {
+      if (error) return reject(error);
+      chunks.push(chunk);
+      if (final) resolve(Buffer.concat(chunks));
+    });
+    try {
+      for (const e of entries) {
+        let file: ZipInputFile & { start(): void };
+        if ('copy' in e) {
+          file = copiedFile(e.name, e.copy.method, e.copy.crc, e.copy.size, e.raw) as ZipInputFile & { start(): void };
+        } else {
+          const deflated = deflateRawSync(e.content, { level: 6 });
+          file = copiedFile(e.name, 8, crc32(e.content) >>> 0, e.content.length, deflated) as ZipInputFile & { start(): void };
+        }
+        zip.add(file);
+        file.start();
+      }
+      zip.end();
+    } catch (error) {
+      reject(error);
+    }
+  });
+}
