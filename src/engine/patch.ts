@@ -241,6 +241,7 @@ function applyPlan(sheet: SheetRead, plan: SheetPlan): string {
   const p = sheet.sheetData.start >= 0 ? prefixOf(text.slice(sheet.sheetData.start, sheet.sheetData.start + 40)) : '';
   const newRows: [number, string][] = [];
   let seq = 1;
+  const formulaStarts = new Set(plan.formulaEdits.map((e) => e.at));
   for (const row of [...plan.cells.keys()].sort((a, b) => a - b)) {
     const cells = [...plan.cells.get(row)!.entries()].sort((a, b) => a[0] - b[0]);
     const tag = index.rowTag(row);
@@ -261,7 +262,7 @@ function applyPlan(sheet: SheetRead, plan: SheetPlan): string {
       if (i !== undefined) {
         const start = sheet.cells.cols[2]![i]!;
         const end = sheet.cells.cols[3]![i]!;
-        if (!plan.formulaEdits.some((e) => e.at === start)) edits.push({ at: start, end, text: xml, seq: seq++ });
+        if (text.slice(start, end) !== xml && !formulaStarts.has(start)) edits.push({ at: start, end, text: xml, seq: seq++ });
       } else {
         const at = index.insertAt(row, col)!;
         edits.push({ at, end: at, text: xml, seq: seq++ });
@@ -363,7 +364,10 @@ export async function patchPackage(
     const list = bySheet.get(i);
     if (list && list.length > 0) {
       const plan = planSheet(sheet, list, { values: options.values, cm });
-      if (plan.formulaEdits.length > 0 || plan.cells.size > 0) replaced.set(sheet.path, Buffer.from(applyPlan(sheet, plan), 'utf8'));
+      if (plan.formulaEdits.length > 0 || plan.cells.size > 0) {
+        const text = applyPlan(sheet, plan);
+        if (text !== sheet.text) replaced.set(sheet.path, Buffer.from(text, 'utf8'));
+      }
     }
     options.onProgress(++done * 0.5, total);
     await new Promise((r) => setImmediate(r));
