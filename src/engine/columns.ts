@@ -15,7 +15,7 @@ import { findFunction, NAMESPACE } from '../cells/catalog';
 import type { CellFunctionDecl } from '../cells/declaration';
 import { ENGINE_CONFIG } from './engine';
 import { hyperFormulaError } from './functions';
-import { simpleCall, type SimpleArg } from './formulas';
+import type { SimpleArg } from './formulas';
 import type { FormulaCell, PackageRead } from './read';
 
 export type ColumnValue = number | string | boolean | { error: string; message?: string };
@@ -69,16 +69,25 @@ interface Group {
   readonly decl: CellFunctionDecl;
   readonly args: readonly SimpleArg[];
   readonly cells: FormulaCell[];
+  readonly places: number[];
 }
 
-/** Computes every qualifying column; `tick` hears how many cells were done. */
-export function computeColumns(read: PackageRead, tick: (n: number) => void): Map<FormulaCell, ColumnValue> {
-  const out = new Map<FormulaCell, ColumnValue>();
+/**
+ * Computes every qualifying column; the values are given by the formula's place among all the
+ * workbook's formulas (sheet by sheet, in file order), undefined for the others. `tick` hears how
+ * many cells were done.
+ */
+export function computeColumns(read: PackageRead, tick: (n: number) => void): (ColumnValue | undefined)[] {
+  const out: (ColumnValue | undefined)[] = [];
+  let offset = 0;
   for (const sheet of read.sheets) {
     const groups = new Map<string, Group>();
-    for (const f of sheet.formulas) {
+    const base = offset;
+    offset += sheet.formulas.length;
+    out.length = offset;
+    for (const [k, f] of sheet.formulas.entries()) {
       if (!f.ours || f.kind === 'array') continue;
-      const call = simpleCall(f.engine, f.row);
+      const call = f.template.simple;
       if (!call) continue;
       const decl = findFunction(call.name.slice(NAMESPACE.length + 1));
       if (!decl || decl.kind !== 'each' || decl.args.some((a) => a.series) || !argumentCountFits(decl, call.args.length)) continue;
@@ -86,15 +95,16 @@ export function computeColumns(read: PackageRead, tick: (n: number) => void): Ma
       if (call.args.some((a) => 'col' in a && plainInput(row?.[a.col - 1]) === undefined)) continue;
       const key = `${f.col}|${call.key}`;
       let g = groups.get(key);
-      if (!g) groups.set(key, (g = { decl, args: call.args, cells: [] }));
+      if (!g) groups.set(key, (g = { decl, args: call.args, cells: [], places: [] }));
       g.cells.push(f);
+      g.places.push(base + k);
     }
     for (const g of groups.values()) {
       const fn = cellFunction(g.decl);
       const args = g.args.map((a) => ('col' in a ? g.cells.map((f) => [plainInput(sheet.rows[f.row - 1]![a.col - 1])]) : a.value));
       const result = fn(...args);
       const whole = result.length === 1 && result[0]!.length === 1 && g.cells.length > 1;
-      g.cells.forEach((f, i) => out.set(f, output(whole ? result[0]![0] : result[i]?.[0])));
+      g.places.forEach((place, i) => (out[place] = output(whole ? result[0]![0] : result[i]?.[0])));
       tick(g.cells.length);
     }
   }

@@ -56,17 +56,18 @@ export interface SimpleCall {
 }
 
 const CALL = /^\s*(XFMR\.[A-Z0-9_.]+)\s*\((.*)\)\s*$/i;
-const REF_ARG = /^\s*\$?([A-Z]{1,3})(\d{1,7})\s*$/i;
+const REF_ARG = /^\s*\$?([A-Z]{1,3})(\d{1,7}|\u0000)\s*$/i;
 const NUM_ARG = /^\s*([+-]?(?:\d+\.?\d*|\.\d+)(?:E[+-]?\d+)?)\s*$/i;
 const STR_ARG = /^\s*"((?:[^"]|"")*)"\s*$/;
 const BOOL_ARG = /^\s*(TRUE|FALSE)\s*$/i;
 
 /**
- * `XFMR.NAME(B7, F7, 0.5, "ONAN")` in row 7: a call whose arguments are cells of the same row
+ * `XFMR.NAME(B7, F7, 0.5, "ONAN")` in row 7 (`row` may be a mark standing for the row number in a
+ * template): a call whose arguments are cells of the same row
  * (relative rows, any column) or constants — the form a filled-down column has. Anything else
  * (nesting, operators, ranges, other rows, names) is undefined and goes the general way.
  */
-export function simpleCall(engineFormula: string, row: number): SimpleCall | undefined {
+export function simpleCall(engineFormula: string, row: number | string): SimpleCall | undefined {
   const m = CALL.exec(engineFormula);
   if (!m) return undefined;
   const inner = m[2]!;
@@ -78,11 +79,13 @@ export function simpleCall(engineFormula: string, row: number): SimpleCall | und
   for (const p of parts) {
     let a: RegExpExecArray | null;
     if ((a = REF_ARG.exec(p))) {
-      if (Number(a[2]) !== row || p.includes(`$${a[2]}`)) return undefined;
+      if (a[2] !== String(row) || p.includes(`$${a[2]}`)) return undefined;
       const col = colNumber(a[1]!);
       if (col > MAX_COL) return undefined;
       args.push({ col });
       key += `|c${col}`;
+    } else if (p.includes('\u0000')) {
+      return undefined; // the row number inside a constant: not the same in every row
     } else if ((a = NUM_ARG.exec(p))) {
       args.push({ value: Number(a[1]) });
       key += `|n${Number(a[1])}`;

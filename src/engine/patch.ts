@@ -15,7 +15,7 @@
  * marks a dynamic array ([MS-XLSX] 2.6.x: metadataType XLDAPR, futureMetadata with
  * `xda:dynamicArrayProperties fDynamic="1"`), and every other cell of the range its value.
  */
-import { a1, MAIN_NS, SHEET_METADATA_REL, SHEET_METADATA_TYPE, type FormulaCell, type PackageRead, type SheetRead } from './read';
+import { a1, MAIN_NS, ROW_MARK, SHEET_METADATA_REL, SHEET_METADATA_TYPE, type FormulaCell, type PackageRead, type SheetRead } from './read';
 import { toStoredFormula } from './names';
 import type { CellResult, JsonValue } from './xlsx';
 import { writeZip, type OutEntry, type ZipReader } from './zip';
@@ -193,7 +193,8 @@ function planSheet(
     const f = res.cell;
     const old = text.slice(f.start, f.end);
     const tagEnd = old.indexOf('>') + 1;
-    const cp = prefixOf(old);
+    const oldStart = old.slice(0, tagEnd);
+    const cp = old.charCodeAt(1) === 99 && (old.charCodeAt(2) === 32 || old.charCodeAt(2) === 62) ? '' : prefixOf(old); // "<c " or "<c>"
     const spill = res.spill && f.kind !== 'shared' ? res.spill : undefined;
     const rows = spill?.length ?? 1;
     const cols = spill?.[0]?.length ?? 1;
@@ -202,27 +203,35 @@ function planSheet(
     const { t, inner } = valueParts(value, cp, options.values);
     const set: Record<string, string | null> = { t: t ?? null };
     let formula = '';
+    let plainTag = !/\st\s*=|\scm\s*=/.test(oldStart); // no type or metadata to change: the start tag stays
     if (options.values) {
       set.cm = null;
     } else {
       const fOld = text.slice(f.fStart, f.fEnd);
-      const stored = toStoredFormula(f.stored);
-      const fTag = fOld.slice(0, fOld.indexOf('>') + 1);
-      const fAttrs = attributes(fTag);
-      const selfClosing = fTag.endsWith('/>');
-      if (spill) {
-        const ref = `${a1(f.row, f.col)}:${a1(f.row + rows - 1, f.col + cols - 1)}`;
-        formula = `${withAttributes(`${cp}f`, fAttrs, { t: 'array', ref })}>${esc(stored)}</${cp}f>`;
-        if (options.cm !== undefined) set.cm = String(options.cm);
-      } else if (f.kind === 'array') {
-        formula = `${withAttributes(`${cp}f`, fAttrs, { ref: a1(f.row, f.col) })}>${esc(stored)}</${cp}f>`;
-      } else if (stored !== f.stored && !selfClosing) {
-        formula = `${withAttributes(`${cp}f`, fAttrs, {})}>${esc(stored)}</${cp}f>`;
-      } else {
+      const stored = f.template.stored !== undefined ? f.template.stored.replaceAll(ROW_MARK, String(f.row)) : toStoredFormula(f.stored);
+      if (!spill && f.kind !== 'array' && (stored === f.stored || fOld.endsWith('/>'))) {
         formula = fOld;
+      } else {
+        const fTag = fOld.slice(0, fOld.indexOf('>') + 1);
+        const fAttrs = attributes(fTag);
+        if (spill) {
+          const ref = `${a1(f.row, f.col)}:${a1(f.row + rows - 1, f.col + cols - 1)}`;
+          formula = `${withAttributes(`${cp}f`, fAttrs, { t: 'array', ref })}>${esc(stored)}</${cp}f>`;
+          if (options.cm !== undefined) {
+            set.cm = String(options.cm);
+            plainTag = false;
+          }
+        } else if (f.kind === 'array') {
+          formula = `${withAttributes(`${cp}f`, fAttrs, { ref: a1(f.row, f.col) })}>${esc(stored)}</${cp}f>`;
+        } else {
+          formula = `${withAttributes(`${cp}f`, fAttrs, {})}>${esc(stored)}</${cp}f>`;
+        }
       }
     }
-    const cellXml = `${withAttributes(`${cp}c`, attributes(old.slice(0, tagEnd)), set)}>${formula}${inner}</${cp}c>`;
+    let start: string;
+    if (plainTag && !options.values) start = t === undefined ? oldStart.slice(0, -1) : `${oldStart.slice(0, -1)} t="${t}"`;
+    else start = withAttributes(`${cp}c`, attributes(oldStart), set);
+    const cellXml = `${start}>${formula}${inner}</${cp}c>`;
     if (cellXml !== old) formulaEdits.push({ at: f.start, end: f.end, text: cellXml, seq: 0 });
     if (spill) {
       for (let i = 0; i < rows; i++) {
@@ -233,8 +242,8 @@ function planSheet(
   return { formulaEdits, cells: other };
 }
 
-/** The sheet's text with the plan applied. */
-function applyPlan(sheet: SheetRead, plan: SheetPlan): string {
+/** The sheet's text with the plan applied, as pieces in order; undefined when nothing changes. */
+function applyPlan(sheet: SheetRead, plan: SheetPlan): string[] | undefined {
   const text = sheet.text;
   const edits: Edit[] = [...plan.formulaEdits];
   const index = new CellIndex(sheet);
@@ -280,6 +289,7 @@ function applyPlan(sheet: SheetRead, plan: SheetPlan): string {
     edits.push({ at: sd.start, end: sd.end, text: `${open}${newRows.map(([, x]) => x).join('')}</${p}sheetData>`, seq: seq++ });
   }
   // At one position, insertions go before the element that starts there (which may be replaced).
+  if (edits.length === 0) return undefined;
   edits.sort((a, b) => a.at - b.at || Number(a.end > a.at) - Number(b.end > b.at) || a.seq - b.seq);
   const out: string[] = [];
   let pos = 0;
@@ -289,7 +299,7 @@ function applyPlan(sheet: SheetRead, plan: SheetPlan): string {
     pos = e.end;
   }
   out.push(text.slice(pos));
-  return out.join('');
+  return out;
 }
 
 /** Removes the cell formulas of a sheet's non-formula text in values mode: nothing else to do. */
@@ -321,6 +331,7 @@ export async function patchPackage(
   cells: CellResult[],
   options: { values: boolean; onProgress: (done: number, total: number) => void },
 ): Promise<Patched> {
+  options.onProgress(0, 1);
   const bySheet = new Map<number, CellResult[]>();
   for (const c of cells) {
     const list = bySheet.get(c.cell.sheet);
@@ -331,7 +342,7 @@ export async function patchPackage(
   const taken = new Set(read.entries.map((e) => e.name));
   let cm = read.dynamicArrayCm;
   const added: OutEntry[] = [];
-  const replaced = new Map<string, Uint8Array>();
+  const replaced = new Map<string, Uint8Array | string[]>();
   const dropped = new Set<string>();
   const changedParts: string[] = [];
 
@@ -365,8 +376,8 @@ export async function patchPackage(
     if (list && list.length > 0) {
       const plan = planSheet(sheet, list, { values: options.values, cm });
       if (plan.formulaEdits.length > 0 || plan.cells.size > 0) {
-        const text = applyPlan(sheet, plan);
-        if (text !== sheet.text) replaced.set(sheet.path, Buffer.from(text, 'utf8'));
+        const pieces = applyPlan(sheet, plan);
+        if (pieces) replaced.set(sheet.path, pieces);
       }
     }
     options.onProgress(++done * 0.5, total);
@@ -381,7 +392,7 @@ export async function patchPackage(
     }
     const content = replaced.get(e.name);
     if (content) {
-      out.push({ name: e.name, content });
+      out.push(Array.isArray(content) ? { name: e.name, pieces: content } : { name: e.name, content });
       changedParts.push(e.name);
     } else out.push({ name: e.name, copy: e, raw: await zip.raw(e) });
   }

@@ -10,8 +10,8 @@
  */
 import type { RawCellContent } from 'hyperformula';
 import { SaxesParser, type SaxesTag } from 'saxes';
-import { toEngineFormula, callsOurFunctions } from './names';
-import { shiftFormula } from './formulas';
+import { callsOurFunctions, toEngineFormula, toStoredFormula } from './names';
+import { shiftFormula, simpleCall, type SimpleCall } from './formulas';
 import { WorkbookError } from './package';
 import type { ZipEntry, ZipReader } from './zip';
 
@@ -32,6 +32,8 @@ export interface FormulaCell {
   readonly stored: string;
   /** The formula in the engine's form, no "=". */
   readonly engine: string;
+  /** What every formula of the same shape shares (a filled-down column shares one). */
+  readonly template: FormulaTemplate;
   /** `t` of the `<f>` element: normal, array or shared. */
   readonly kind: 'normal' | 'array' | 'shared';
   /** The `<c>` element in the part's text: [start, end). */
@@ -61,14 +63,21 @@ class IntColumns {
   constructor(n: number) {
     this.cols = Array.from({ length: n }, () => new Int32Array(1024));
   }
-  push(...v: number[]): void {
-    if (this.length === this.cols[0]!.length) this.cols = this.cols.map((c) => {
-      const d = new Int32Array(c.length * 2);
-      d.set(c);
-      return d;
-    });
-    for (let k = 0; k < v.length; k++) this.cols[k]![this.length] = v[k]!;
-    this.length++;
+  push(a: number, b: number, c: number, d: number, e = 0): void {
+    if (this.length === this.cols[0]!.length) {
+      this.cols = this.cols.map((col) => {
+        const grown = new Int32Array(col.length * 2);
+        grown.set(col);
+        return grown;
+      });
+    }
+    const cols = this.cols;
+    const i = this.length++;
+    cols[0]![i] = a;
+    cols[1]![i] = b;
+    cols[2]![i] = c;
+    cols[3]![i] = d;
+    if (cols.length > 4) cols[4]![i] = e;
   }
 }
 
@@ -142,15 +151,16 @@ export function columnLetters(col: number): string {
 
 export const a1 = (row: number, col: number): string => `${columnLetters(col)}${row}`;
 
-const utf8 = new TextDecoder('utf-8', { ignoreBOM: true });
-
+/** A part's text, decoded chunk by chunk as it is unpacked (a byte-order mark kept). */
 async function partText(zip: ZipReader, entry: ZipEntry, onBytes?: (n: number) => void): Promise<string> {
-  const chunks: Buffer[] = [];
+  const utf8 = new TextDecoder('utf-8', { ignoreBOM: true });
+  const pieces: string[] = [];
   await zip.stream(entry, (c) => {
-    chunks.push(c);
+    pieces.push(utf8.decode(c, { stream: true }));
     onBytes?.(c.length);
   });
-  return utf8.decode(Buffer.concat(chunks));
+  pieces.push(utf8.decode());
+  return pieces.join('');
 }
 
 type Handlers = {
@@ -294,6 +304,63 @@ function cellValue(t: string | undefined, v: string | undefined, inline: string 
   }
 }
 
+/**
+ * A formula with its own row number taken out: `XFMR.EFF(B7,F7,0.5)` in row 7 and
+ * `XFMR.EFF(B8,F8,0.5)` in row 8 have one template, so the name translation (names.ts) and the
+ * shape check of a simple call (formulas.ts) run once for a whole filled-down column.
+ */
+export interface FormulaTemplate {
+  /** The translations with ROW_MARK where the row number was; undefined when not templated. */
+  readonly engine?: string;
+  readonly stored?: string;
+  readonly ours: boolean;
+  /** The key of a simple call (formulas.ts), the same for every row of the template. */
+  readonly simple?: SimpleCall;
+}
+
+export const ROW_MARK = '\u0000';
+
+const templates = new Map<string, FormulaTemplate>();
+
+/**
+ * The row number may be taken out only where it is the row of a cell reference — after a column
+ * letter or "$", not followed by a name character or "(" — so that taking it out cannot change
+ * a function name the translations look for. This depends on the marked text alone, so it is
+ * checked once per template.
+ */
+function markedRowsAreReferences(key: string): boolean {
+  for (let i = key.indexOf(ROW_MARK); i >= 0; i = key.indexOf(ROW_MARK, i + 1)) {
+    const b = key.charCodeAt(i - 1);
+    const a = key.charCodeAt(i + 1);
+    const letterOrDollar = (b >= 65 && b <= 90) || (b >= 97 && b <= 122) || b === 36;
+    const nameNext = (a >= 48 && a <= 57) || (a >= 65 && a <= 90) || (a >= 97 && a <= 122) || a === 95 || a === 46 || a === 40;
+    if (!letterOrDollar || nameNext) return false;
+  }
+  return true;
+}
+
+const UNTEMPLATED: FormulaTemplate = { ours: false };
+
+/** The engine form, stored form and shape of a formula in a given row, computed once per template. */
+export function formulaShape(stored: string, row: number): { engine: string; template: FormulaTemplate } {
+  const digits = String(row);
+  const key = stored.includes(digits) ? stored.replaceAll(digits, ROW_MARK) : undefined;
+  let t = key === undefined ? UNTEMPLATED : templates.get(key);
+  if (t === undefined) {
+    if (markedRowsAreReferences(key!)) {
+      const engine = toEngineFormula(key!);
+      t = { engine, stored: toStoredFormula(key!), ours: callsOurFunctions(key!), simple: simpleCall(engine, ROW_MARK) };
+    } else t = UNTEMPLATED;
+    if (templates.size > 100_000) templates.clear();
+    templates.set(key!, t);
+  }
+  if (t.engine === undefined) {
+    const engine = toEngineFormula(stored);
+    return { engine, template: { ours: callsOurFunctions(stored), simple: simpleCall(engine, row) } };
+  }
+  return { engine: t.engine.replaceAll(ROW_MARK, digits), template: t };
+}
+
 interface SharedMaster {
   readonly row: number;
   readonly col: number;
@@ -429,12 +496,14 @@ export function readSheet(
         const range = kind === 'array' && fAttrs.ref ? parseRange(fAttrs.ref) : undefined;
         const oldRange = range && (range.bottom > range.top || range.right > range.left) ? range : undefined;
         if (oldRange) oldRanges.push(oldRange);
+        const shape = formulaShape(stored, rowNum);
         formulas.push({
           sheet: meta.index,
           row: rowNum,
           col,
           stored,
-          engine: toEngineFormula(stored),
+          engine: shape.engine,
+          template: shape.template,
           kind,
           start: cStart,
           end,
@@ -442,7 +511,7 @@ export function readSheet(
           fEnd,
           oldRange,
           cm: cCm,
-          ours: callsOurFunctions(stored),
+          ours: shape.template.ours,
         });
         return;
       }

@@ -10,7 +10,7 @@
  *     cells of spilled results) are replaced.
  */
 import { DetailedCellError, HyperFormula, type HyperFormula as HF, type RawCellContent, type SerializedNamedExpression } from 'hyperformula';
-import { computeColumns, type ColumnValue } from './columns';
+import { computeColumns } from './columns';
 import { createEngine, ENGINE_CONFIG } from './engine';
 import { arraySize } from './internals';
 import { toEngineFormula } from './names';
@@ -147,23 +147,29 @@ export interface CellResult {
 
 function calculateCells(read: PackageRead, onProgress: (done: number, total: number) => void): CellResult[] {
   const all = read.sheets.flatMap((s) => s.formulas);
-  const ours = all.filter((f) => f.ours).length;
+  let ours = 0;
+  for (const f of all) if (f.ours) ours++;
   let done = 0;
   const total = Math.max(1, ours);
   const tick = (n = 1) => {
     done += n;
     if (done <= total) onProgress(done, total);
   };
-  const columns: Map<FormulaCell, ColumnValue> = computeColumns(read, tick);
-  const rest = all.filter((f) => !columns.has(f));
-  const results = new Map<FormulaCell, CellResult>();
-  for (const [cell, v] of columns) results.set(cell, { cell, value: v });
+  const columns = computeColumns(read, tick);
+  const results: CellResult[] = new Array(all.length);
+  const rest: number[] = [];
+  for (let i = 0; i < all.length; i++) {
+    const c = columns[i];
+    if (c !== undefined) results[i] = { cell: all[i]!, value: c };
+    else rest.push(i);
+  }
   if (rest.length > 0) {
     const sheets: Record<string, RawCellContent[][]> = {};
+    let place = 0;
     for (const s of read.sheets) {
       const rows = s.rows.map((r) => (r ? [...r] : []));
       for (const f of s.formulas) {
-        const c = columns.get(f);
+        const c = columns[place++];
         (rows[f.row - 1] ??= [])[f.col - 1] = c !== undefined ? engineInput(c) : f.kind === 'array' ? `=ARRAYFORMULA(${f.engine})` : `=${f.engine}`;
       }
       for (let i = 0; i < rows.length; i++) rows[i] ??= [];
@@ -171,16 +177,17 @@ function calculateCells(read: PackageRead, onProgress: (done: number, total: num
     }
     const hf = buildEngine(sheets, read, () => tick());
     try {
-      for (const f of rest) {
+      for (const i of rest) {
+        const f = all[i]!;
         const address = { sheet: f.sheet, row: f.row - 1, col: f.col - 1 };
         const value = jsonValue(hf.getCellValue(address));
         const size = arraySize(hf, address);
         if (size.rows > 1 || size.cols > 1) {
           const end = { ...address, row: address.row + size.rows - 1, col: address.col + size.cols - 1 };
           const spill = (hf.getRangeValues({ start: address, end }) as unknown[][]).map((r) => r.map(jsonValue));
-          results.set(f, { cell: f, value, spill });
+          results[i] = { cell: f, value, spill };
         } else {
-          results.set(f, { cell: f, value });
+          results[i] = { cell: f, value };
         }
       }
     } finally {
@@ -188,7 +195,7 @@ function calculateCells(read: PackageRead, onProgress: (done: number, total: num
     }
   }
   onProgress(total, total);
-  return all.map((f) => results.get(f)!);
+  return results;
 }
 
 /** Reads, recalculates and writes a workbook: the one way through the engine. */
@@ -204,35 +211,45 @@ export async function calculateWorkbook(bytes: Buffer, options: CalculateOptions
     const cells = calculateCells(read, (done, total) => progress('calculating', done, total));
     await new Promise((r) => setImmediate(r));
     const written = await patchPackage(zip, read, cells, { values: Boolean(options.values), onProgress: (done, total) => progress('writing', done, total) });
-    return { bytes: written.bytes, changedParts: written.changedParts, ...summarise(read, cells) };
+    let results: FormulaResult[] | undefined;
+    return {
+      bytes: written.bytes,
+      changedParts: written.changedParts,
+      ...counts(cells),
+      // Built when asked for: 400,000 result objects cost more than the summary needs.
+      get results() {
+        return (results ??= resultList(read, cells));
+      },
+    };
   } finally {
     zip.close();
   }
 }
 
-function summarise(read: PackageRead, cells: CellResult[]): Omit<Calculated, 'bytes' | 'changedParts'> {
+function counts(cells: CellResult[]): Omit<Calculated, 'bytes' | 'changedParts' | 'results'> {
   const errorCodes: Record<string, number> = {};
   let errors = 0;
   let oursErrors = 0;
-  const results: FormulaResult[] = [];
+  let ours = 0;
+  const count = (v: JsonValue, f: FormulaCell) => {
+    if (!isError(v)) return;
+    errors++;
+    if (f.ours) oursErrors++;
+    errorCodes[v.error] = (errorCodes[v.error] ?? 0) + 1;
+  };
   for (const c of cells) {
-    const f = c.cell;
-    const sheet = read.sheets[f.sheet]!.name;
-    const values = c.spill ?? [[c.value]];
-    let n = 0;
-    for (const row of values) {
-      for (const v of row) {
-        if (isError(v)) {
-          n++;
-          errorCodes[v.error] = (errorCodes[v.error] ?? 0) + 1;
-        }
-      }
-    }
-    errors += n;
-    if (f.ours) oursErrors += n;
-    const result: FormulaResult = { sheet, cell: a1(f.row, f.col), formula: `=${f.engine}`, value: c.value };
-    if (c.spill) result.spill = { ref: `${a1(f.row, f.col)}:${a1(f.row + c.spill.length - 1, f.col + (c.spill[0]?.length ?? 1) - 1)}`, values: c.spill };
-    results.push(result);
+    if (c.cell.ours) ours++;
+    if (c.spill) for (const row of c.spill) for (const v of row) count(v, c.cell);
+    else count(c.value, c.cell);
   }
-  return { results, formulas: cells.length, ours: cells.filter((c) => c.cell.ours).length, errors, oursErrors, errorCodes };
+  return { formulas: cells.length, ours, errors, oursErrors, errorCodes };
+}
+
+function resultList(read: PackageRead, cells: CellResult[]): FormulaResult[] {
+  return cells.map((c) => {
+    const f = c.cell;
+    const result: FormulaResult = { sheet: read.sheets[f.sheet]!.name, cell: a1(f.row, f.col), formula: `=${f.engine}`, value: c.value };
+    if (c.spill) result.spill = { ref: `${a1(f.row, f.col)}:${a1(f.row + c.spill.length - 1, f.col + (c.spill[0]?.length ?? 1) - 1)}`, values: c.spill };
+    return result;
+  });
 }
