@@ -4,6 +4,7 @@
  * ratio deviation, rated current — one formula per cell, as a user fills them down.
  *   --shared   the formulas as Excel stores a filled-down column (`<f t="shared">`, ECMA-376 Part 1 §18.3.1.40)
  *   --native   the same four results as native formulas (for another spreadsheet to recalculate)
+ *   --loads    instead: one unit's loads, one XFMR.LOSSES a row and XFMR.ELOSS over the column
  *
  * Run: npm run make-fleet -- OUT.xlsx [ROWS=10000] [--shared | --native]
  *
@@ -85,8 +86,24 @@ function sheetXml(rows: number, kind: FleetFormulas): string {
   return out.join('');
 }
 
-/** The fleet workbook as .xlsx bytes. */
-export function fleetPackage(rows: number, kind: FleetFormulas = 'xfmr'): Buffer {
+/**
+ * A sheet of `rows` hourly loads of one unit (column A, per unit), each row's losses as a
+ * filled-down XFMR.LOSSES (column B), and in C1 the energy lost over the whole column.
+ */
+function loadColumnXml(rows: number): string {
+  const out: string[] = [
+    '<?xml version="1.0" encoding="UTF-8" standalone="yes"?>\n<worksheet xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main"><sheetData>',
+  ];
+  for (let r = 1; r <= rows; r++) {
+    const total = r === 1 ? formula('C1', `_xldudf_XFMR_ELOSS(1000,10000,A1:A${rows})`) : '';
+    out.push(`<row r="${r}">${num(`A${r}`, ((r * 37) % 90) / 100 + 0.1)}${formula(`B${r}`, `_xldudf_XFMR_LOSSES(1000,10000,A${r})`)}${total}</row>`);
+  }
+  out.push('</sheetData></worksheet>');
+  return out.join('');
+}
+
+/** The fleet workbook as .xlsx bytes; `loads` makes the one-unit load column instead. */
+export function fleetPackage(rows: number, kind: FleetFormulas | 'loads' = 'xfmr'): Buffer {
   const files = {
     '[Content_Types].xml': strToU8(
       '<?xml version="1.0" encoding="UTF-8" standalone="yes"?>\n<Types xmlns="http://schemas.openxmlformats.org/package/2006/content-types"><Default Extension="rels" ContentType="application/vnd.openxmlformats-package.relationships+xml"/><Default Extension="xml" ContentType="application/xml"/><Override PartName="/xl/workbook.xml" ContentType="application/vnd.openxmlformats-officedocument.spreadsheetml.sheet.main+xml"/><Override PartName="/xl/worksheets/sheet1.xml" ContentType="application/vnd.openxmlformats-officedocument.spreadsheetml.worksheet+xml"/></Types>',
@@ -100,21 +117,22 @@ export function fleetPackage(rows: number, kind: FleetFormulas = 'xfmr'): Buffer
     'xl/_rels/workbook.xml.rels': strToU8(
       '<?xml version="1.0" encoding="UTF-8" standalone="yes"?>\n<Relationships xmlns="http://schemas.openxmlformats.org/package/2006/relationships"><Relationship Id="rId1" Type="http://schemas.openxmlformats.org/officeDocument/2006/relationships/worksheet" Target="worksheets/sheet1.xml"/></Relationships>',
     ),
-    'xl/worksheets/sheet1.xml': strToU8(sheetXml(rows, kind)),
+    'xl/worksheets/sheet1.xml': strToU8(kind === 'loads' ? loadColumnXml(rows) : sheetXml(rows, kind)),
   };
-  return Buffer.from(zipSync(files, { level: 6 }));
+  return Buffer.from(zipSync(files, { level: kind === 'loads' ? 1 : 6 }));
 }
 
-if (require.main === module) {
+if (require.main === module && /make-fleet\.[jt]s$/.test(process.argv[1] ?? '')) {
   const args = process.argv.slice(2);
   const flags = new Set(args.filter((a) => a.startsWith('--')));
   const [out, count] = args.filter((a) => !a.startsWith('--'));
   if (!out || !/\.xlsx$/i.test(out)) {
-    console.error('usage: npm run make-fleet -- OUT.xlsx [ROWS=10000] [--shared | --native]');
+    console.error('usage: npm run make-fleet -- OUT.xlsx [ROWS=10000] [--shared | --native | --loads]');
     process.exit(2);
   }
   const rows = Number(count ?? 10_000);
-  const kind: FleetFormulas = flags.has('--native') ? 'native' : flags.has('--shared') ? 'shared' : 'xfmr';
+  const kind = flags.has('--loads') ? 'loads' : flags.has('--native') ? 'native' : flags.has('--shared') ? 'shared' : 'xfmr';
   writeFileSync(out, fleetPackage(rows, kind));
-  console.log(`${out}: ${rows.toLocaleString('en-US')} units × 4 ${kind === 'native' ? 'native' : 'XFMR'} formulas${kind === 'shared' ? ' (shared, as Excel stores a filled-down column)' : ''}`);
+  const what = kind === 'loads' ? 'hourly loads with XFMR.LOSSES each and XFMR.ELOSS over all' : `units × 4 ${kind === 'native' ? 'native' : 'XFMR'} formulas${kind === 'shared' ? ' (shared, as Excel stores a filled-down column)' : ''}`;
+  console.log(`${out}: ${rows.toLocaleString('en-US')} ${what}`);
 }

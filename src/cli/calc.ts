@@ -57,7 +57,7 @@ function startWorker(entry: string, job: Job): Worker {
   const data = { fluxbookEngine: true };
   const w = entry.endsWith('.ts')
     ? new Worker(`require('tsx/cjs'); require(${JSON.stringify(entry)});`, { eval: true, workerData: data })
-    : new Worker(entry, { workerData: data });
+    : new Worker(entry, { workerData: data, resourceLimits: { maxYoungGenerationSizeMb: 32 } });
   w.postMessage(job, [job.bytes.buffer as ArrayBuffer]);
   return w;
 }
@@ -106,7 +106,7 @@ async function viaWorker(entry: string, job: Job, onProgress: (stage: Stage, don
 export async function recalculate(bytes: Buffer, options: { values?: boolean; json?: boolean; inProcess?: boolean } = {}) {
   const bar = progress(wantsBar(bytes.length));
   const job: Job = { bytes: new Uint8Array(bytes), values: Boolean(options.values), json: Boolean(options.json) };
-  const entry = options.inProcess ? undefined : workerScript();
+  const entry = options.inProcess || process.env.FLUXBOOK_IN_PROCESS ? undefined : workerScript();
   try {
     const onProgress = (stage: Stage, done: number, total: number) => bar.update(stage, done, total);
     return entry ? await viaWorker(entry, job, onProgress) : await work(job, onProgress);

@@ -15,8 +15,7 @@
  * marks a dynamic array ([MS-XLSX] 2.6.x: metadataType XLDAPR, futureMetadata with
  * `xda:dynamicArrayProperties fDynamic="1"`), and every other cell of the range its value.
  */
-import { a1, MAIN_NS, ROW_MARK, SHEET_METADATA_REL, SHEET_METADATA_TYPE, type FormulaCell, type PackageRead, type SheetRead } from './read';
-import { toStoredFormula } from './names';
+import { a1, MAIN_NS, SHEET_METADATA_REL, SHEET_METADATA_TYPE, type FormulaCell, type PackageRead, type SheetRead } from './read';
 import type { CellResult, JsonValue } from './xlsx';
 import { writeZip, type OutEntry, type ZipReader } from './zip';
 
@@ -208,8 +207,8 @@ function planSheet(
       set.cm = null;
     } else {
       const fOld = text.slice(f.fStart, f.fEnd);
-      const stored = f.template.stored !== undefined ? f.template.stored.replaceAll(ROW_MARK, String(f.row)) : toStoredFormula(f.stored);
-      if (!spill && f.kind !== 'array' && (stored === f.stored || fOld.endsWith('/>'))) {
+      const stored = f.written;
+      if (!spill && f.kind !== 'array' && (f.template.stored === (f.template.source ?? f.stored) || fOld.endsWith('/>'))) {
         formula = fOld;
       } else {
         const fTag = fOld.slice(0, fOld.indexOf('>') + 1);

@@ -22,31 +22,51 @@ export const SHEET_METADATA_TYPE = 'application/vnd.openxmlformats-officedocumen
 
 const local = (name: string): string => name.slice(name.indexOf(':') + 1);
 
-/** One formula cell as the file stores it. */
-export interface FormulaCell {
-  readonly sheet: number;
-  /** 1-based. */
-  readonly row: number;
-  readonly col: number;
+/**
+ * One formula cell as the file stores it. Its texts come from its template (a filled-down column
+ * shares one) and are made when asked for: a fleet has hundreds of thousands of these.
+ */
+export class FormulaCell {
+  constructor(
+    readonly sheet: number,
+    /** 1-based. */
+    readonly row: number,
+    readonly col: number,
+    /** `t` of the `<f>` element: normal, array or shared. */
+    readonly kind: 'normal' | 'array' | 'shared',
+    /** The `<c>` element in the part's text: [start, end). */
+    readonly start: number,
+    readonly end: number,
+    /** The `<f>` element inside it. */
+    readonly fStart: number,
+    readonly fEnd: number,
+    readonly template: FormulaTemplate,
+    /** The formula as stored, when it has no template. */
+    private readonly text: string | undefined,
+    /** The old result range of an array formula, when larger than its cell. */
+    readonly oldRange: CellRange | undefined,
+    /** The `cm` attribute, 1-based index of the cell metadata. */
+    readonly cm: number | undefined,
+  ) {}
+
   /** The formula as stored (no "="), shared formulas already moved to this cell. */
-  readonly stored: string;
+  get stored(): string {
+    return this.text ?? this.template.source!.replaceAll(ROW_MARK, String(this.row));
+  }
+
   /** The formula in the engine's form, no "=". */
-  readonly engine: string;
-  /** What every formula of the same shape shares (a filled-down column shares one). */
-  readonly template: FormulaTemplate;
-  /** `t` of the `<f>` element: normal, array or shared. */
-  readonly kind: 'normal' | 'array' | 'shared';
-  /** The `<c>` element in the part's text: [start, end). */
-  readonly start: number;
-  readonly end: number;
-  /** The `<f>` element inside it. */
-  readonly fStart: number;
-  readonly fEnd: number;
-  /** The old result range of an array formula, when larger than its cell. */
-  readonly oldRange?: CellRange;
-  /** The `cm` attribute, 1-based index of the cell metadata. */
-  readonly cm?: number;
-  readonly ours: boolean;
+  get engine(): string {
+    return this.template.source !== undefined ? this.template.engine.replaceAll(ROW_MARK, String(this.row)) : this.template.engine;
+  }
+
+  /** The formula as it is written back: our calls under their `_xldudf_` names. */
+  get written(): string {
+    return this.template.source !== undefined ? this.template.stored.replaceAll(ROW_MARK, String(this.row)) : this.template.stored;
+  }
+
+  get ours(): boolean {
+    return this.template.ours;
+  }
 }
 
 export interface CellRange {
@@ -310,9 +330,11 @@ function cellValue(t: string | undefined, v: string | undefined, inline: string 
  * shape check of a simple call (formulas.ts) run once for a whole filled-down column.
  */
 export interface FormulaTemplate {
-  /** The translations with ROW_MARK where the row number was; undefined when not templated. */
-  readonly engine?: string;
-  readonly stored?: string;
+  /** The stored formula with ROW_MARK where the row number was; undefined for a formula of its own. */
+  readonly source?: string;
+  /** The engine's form and the form written back, with ROW_MARK where `source` has it. */
+  readonly engine: string;
+  readonly stored: string;
   readonly ours: boolean;
   /** The key of a simple call (formulas.ts), the same for every row of the template. */
   readonly simple?: SimpleCall;
@@ -339,26 +361,22 @@ function markedRowsAreReferences(key: string): boolean {
   return true;
 }
 
-const UNTEMPLATED: FormulaTemplate = { ours: false };
-
-/** The engine form, stored form and shape of a formula in a given row, computed once per template. */
-export function formulaShape(stored: string, row: number): { engine: string; template: FormulaTemplate } {
+/** The template of a formula in a given row: shared by every formula of the same shape. */
+export function formulaTemplate(stored: string, row: number): FormulaTemplate {
   const digits = String(row);
   const key = stored.includes(digits) ? stored.replaceAll(digits, ROW_MARK) : undefined;
-  let t = key === undefined ? UNTEMPLATED : templates.get(key);
-  if (t === undefined) {
-    if (markedRowsAreReferences(key!)) {
-      const engine = toEngineFormula(key!);
-      t = { engine, stored: toStoredFormula(key!), ours: callsOurFunctions(key!), simple: simpleCall(engine, ROW_MARK) };
-    } else t = UNTEMPLATED;
-    if (templates.size > 100_000) templates.clear();
-    templates.set(key!, t);
+  if (key !== undefined) {
+    let t = templates.get(key);
+    if (t === undefined && markedRowsAreReferences(key)) {
+      const engine = toEngineFormula(key);
+      t = { source: key, engine, stored: toStoredFormula(key), ours: callsOurFunctions(key), simple: simpleCall(engine, ROW_MARK) };
+      if (templates.size > 100_000) templates.clear();
+      templates.set(key, t);
+    }
+    if (t !== undefined) return t;
   }
-  if (t.engine === undefined) {
-    const engine = toEngineFormula(stored);
-    return { engine, template: { ours: callsOurFunctions(stored), simple: simpleCall(engine, row) } };
-  }
-  return { engine: t.engine.replaceAll(ROW_MARK, digits), template: t };
+  const engine = toEngineFormula(stored);
+  return { engine, stored: toStoredFormula(stored), ours: callsOurFunctions(stored), simple: simpleCall(engine, row) };
 }
 
 interface SharedMaster {
@@ -374,6 +392,8 @@ export function readSheet(
   strings: string[],
   date1904: boolean,
   onProgress?: (chars: number) => void,
+  /** Keep the values formula cells hold from the last calculation in `rows` too (to read a result file). */
+  cachedValues = false,
 ): SheetRead {
   const parser = new SaxesParser({ position: true });
   const rows: RawCellContent[][] = [];
@@ -496,23 +516,9 @@ export function readSheet(
         const range = kind === 'array' && fAttrs.ref ? parseRange(fAttrs.ref) : undefined;
         const oldRange = range && (range.bottom > range.top || range.right > range.left) ? range : undefined;
         if (oldRange) oldRanges.push(oldRange);
-        const shape = formulaShape(stored, rowNum);
-        formulas.push({
-          sheet: meta.index,
-          row: rowNum,
-          col,
-          stored,
-          engine: shape.engine,
-          template: shape.template,
-          kind,
-          start: cStart,
-          end,
-          fStart,
-          fEnd,
-          oldRange,
-          cm: cCm,
-          ours: shape.template.ours,
-        });
+        const template = formulaTemplate(stored, rowNum);
+        formulas.push(new FormulaCell(meta.index, rowNum, col, kind, cStart, end, fStart, fEnd, template, template.source === undefined ? stored : undefined, oldRange, cCm));
+        if (cachedValues) (rows[rowNum - 1] ??= [])[col - 1] = cellValue(cType, vText, isText, strings, date1904);
         return;
       }
     }
@@ -537,7 +543,7 @@ export function readSheet(
 }
 
 /** Reads the package: workbook, names, strings, metadata and every worksheet. */
-export async function readPackage(zip: ZipReader, onProgress?: (done: number, total: number) => void): Promise<PackageRead> {
+export async function readPackage(zip: ZipReader, onProgress?: (done: number, total: number) => void, cachedValues = false): Promise<PackageRead> {
   const byName = new Map(zip.entries.map((e) => [e.name.replace(/^\//, ''), e]));
   const texts = new Map<string, string>();
   const text = async (path: string): Promise<string | undefined> => {
@@ -613,7 +619,7 @@ export async function readPackage(zip: ZipReader, onProgress?: (done: number, to
     const sheetText = await partText(zip, entry, tick);
     // Characters stand in for bytes here: the bar needs a share, not an exact figure.
     const scale = entry.size / Math.max(1, sheetText.length);
-    sheets.push(readSheet(sheetText, { ...s, entry, index }, strings, date1904, (chars) => tick(chars * scale)));
+    sheets.push(readSheet(sheetText, { ...s, entry, index }, strings, date1904, (chars) => tick(chars * scale), cachedValues));
     await new Promise((r) => setImmediate(r)); // let the progress bar and signals through
   }
   return { entries: zip.entries, sheets, names, date1904, workbookPath, workbookRelsPath, metadataPath, dynamicArrayCm, texts };

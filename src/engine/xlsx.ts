@@ -209,6 +209,7 @@ export async function calculateWorkbook(bytes: Buffer, options: CalculateOptions
     progress('calculating', 0, 1);
     await new Promise((r) => setImmediate(r));
     const cells = calculateCells(read, (done, total) => progress('calculating', done, total));
+    for (const s of read.sheets) s.rows.length = 0; // the values were the engine's input only
     await new Promise((r) => setImmediate(r));
     const written = await patchPackage(zip, read, cells, { values: Boolean(options.values), onProgress: (done, total) => progress('writing', done, total) });
     let results: FormulaResult[] | undefined;
