@@ -129,7 +129,7 @@ function eachSize(plugin: PluginInternals, decl: CellFunctionDecl, ast: Ast, sta
   let rows = 1;
   let cols = 1;
   const s = withArrays(state);
-  if (ast.args.length > decl.args.length) return ArraySize.scalar(); // refused: wrong number of arguments
+  if (argumentCountError(decl, ast.args.length)) return ArraySize.scalar(); // refused: wrong number of arguments
   for (let k = 0; k < ast.args.length; k++) {
     if (decl.args[k]!.series) continue;
     const size = plugin.arraySizeForAst(ast.args[k], s);
@@ -169,8 +169,24 @@ const sizeMismatch = (rows: number, cols: number, reserved: { rows: number; cols
     `the result is ${rows}×${cols} cells but ${reserved.rows}×${reserved.cols} were reserved when the formula was entered; enter the formula again`,
   );
 
-function evaluate(plugin: PluginInternals, fn: CellFunction, metadata: FunctionMetadata, ast: Ast, state: State): unknown {
+/** `XFMR.EFF(kva, p0_w, pk_w, [load], [pf])`: the call as its declaration has it, optional arguments in brackets. */
+export function signature(decl: CellFunctionDecl): string {
+  return `${formulaName(decl)}(${decl.args.map((a) => (a.optional ? `[${a.name}]` : a.name)).join(', ')})`;
+}
+
+/** One #VALUE! for a call with too few or too many arguments, naming the function's signature. */
+function argumentCountError(decl: CellFunctionDecl, given: number): CellError | undefined {
+  const required = decl.args.filter((a) => !a.optional).length;
+  const most = decl.args.length;
+  if (given >= required && given <= most) return undefined;
+  const takes = required === most ? `${most}` : `${required} to ${most}`;
+  return new CellError(ErrorType.VALUE, `${formulaName(decl)} takes ${takes} argument${most === 1 ? '' : 's'}, ${signature(decl)}; ${given} ${given === 1 ? 'was' : 'were'} given`);
+}
+
+function evaluate(plugin: PluginInternals, decl: CellFunctionDecl, fn: CellFunction, metadata: FunctionMetadata, ast: Ast, state: State): unknown {
   session?.called?.();
+  const wrongCount = argumentCountError(decl, ast.args.length);
+  if (wrongCount) return wrongCount;
   return plugin.runFunction(ast.args, state, metadata, (...values: unknown[]) => {
     const result = fn(...values.map(toAdapterArgument));
     const rows = result.length;
@@ -201,19 +217,22 @@ export function buildPlugin(decls: readonly CellFunctionDecl[]): FunctionPluginD
     const metadata: FunctionMetadata = {
       method,
       sizeOfResultArrayMethod: `${method}_size`,
-      // Every argument may be left out as far as HyperFormula is concerned: the adapter applies the
-      // defaults and names a missing required argument in its message.
-      parameters: decl.args.map(() => ({ argumentType: FunctionArgumentType.ANY, optionalArg: true })),
+      // Every argument may be left out, and more may be given, as far as HyperFormula is concerned:
+      // the count is checked against the declaration (argumentCountError), and the adapter applies
+      // the defaults and names a blank required argument in its message.
+      parameters: [...decl.args.map(() => ({ argumentType: FunctionArgumentType.ANY, optionalArg: true })), { argumentType: FunctionArgumentType.ANY, optionalArg: true }],
+      repeatLastArgs: 1,
       vectorizationForbidden: true, // we broadcast ourselves, with our messages
       enableArrayArithmeticForArguments: true,
     };
     implemented[formulaName(decl)] = metadata;
     const fn = adapt(decl, hyperFormulaError, { isError: (v) => v instanceof CellError });
     proto[method] = function (this: PluginInternals, ast: Ast, state: State) {
-      return evaluate(this, fn, metadata, ast, state);
+      return evaluate(this, decl, fn, metadata, ast, state);
     };
     proto[`${method}_size`] = function (this: PluginInternals, ast: Ast, state: State) {
-      return decl.kind === 'each' ? eachSize(this, decl, ast, state) : blockSize(this, fn, ast, state);
+      if (decl.kind === 'each') return eachSize(this, decl, ast, state);
+      return argumentCountError(decl, ast.args.length) ? ArraySize.scalar() : blockSize(this, fn, ast, state);
     };
   }
   (FluxbookPlugin as unknown as { implementedFunctions: ImplementedFunctions }).implementedFunctions = implemented;

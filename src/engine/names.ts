@@ -77,11 +77,18 @@ function unknownOfOurs(rest: string): string | undefined {
   return rest.toUpperCase().startsWith(prefix) && rest.length > prefix.length ? `${NAMESPACE}.${rest.slice(prefix.length).toUpperCase()}` : undefined;
 }
 
+/**
+ * Another add-in's `_xldudf_…` call as a name the engine parses and does not know, so that cell
+ * alone gets #NAME? (and formulas reading it the error value), not a parse error: XLDUDF.ACME_FLOW.
+ */
+export const OTHER_ADDIN_PREFIX = 'XLDUDF.';
+const otherAddIn = (rest: string): string => `${OTHER_ADDIN_PREFIX}${rest.toUpperCase()}`;
+
 /** The formula as the engine reads it: our stored names back to XFMR.NAME, `_xlfn.` dropped. */
 export function toEngineFormula(stored: string): string {
   return outsideQuotes(stored, (code) =>
     code
-      .replace(STORED_CALL, (whole, rest: string) => byStoredName.get(`_XLDUDF_${rest.toUpperCase()}`) ?? unknownOfOurs(rest) ?? whole)
+      .replace(STORED_CALL, (whole, rest: string) => byStoredName.get(`_XLDUDF_${rest.toUpperCase()}`) ?? unknownOfOurs(rest) ?? otherAddIn(rest))
       .replace(FUTURE_PREFIX, '')
       .replace(PLAIN_CALL, (whole, rest: string) => (byFormulaName.has(`${NAMESPACE}.${rest.toUpperCase()}`) ? `${NAMESPACE}.${rest.toUpperCase()}` : whole)),
   );
