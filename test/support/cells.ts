@@ -1,13 +1,18 @@
 /** Calling a cell function by name from a test, as a formula would, with the stand-in error values. */
 import { expect } from 'vitest';
-import { adapt, CellError, plainErrors } from '../../src/cells/adapter';
+import { adapt, CellError, type CellFunction, plainErrors } from '../../src/cells/adapter';
 import { findFunction } from '../../src/cells/catalog';
+
+/** XFMR.<name> as a formula sees it, returning whole results with the stand-in error values. */
+export function cellFunction(name: string): CellFunction {
+  const decl = findFunction(name);
+  if (decl === undefined) throw new Error(`no cell function ${name}`);
+  return adapt(decl, plainErrors);
+}
 
 /** The whole result of XFMR.<name> called with plain values (a range is an array of rows). */
 export function xfmrRange(name: string, ...args: unknown[]): unknown[][] {
-  const decl = findFunction(name);
-  if (decl === undefined) throw new Error(`no cell function ${name}`);
-  return adapt(decl, plainErrors)(...args);
+  return cellFunction(name)(...args);
 }
 
 /** The first (often the only) cell of XFMR.<name>'s result. */
@@ -15,9 +20,12 @@ export function xfmr(name: string, ...args: unknown[]): unknown {
   return xfmrRange(name, ...args)[0]![0];
 }
 
-/** The first cell of a result, which must be an error value. */
+/** The first cell of a result. */
+export const firstCell = (result: unknown[][]): unknown => result[0]![0];
+
+/** A cell, or the first cell of a result, which must be an error value. */
 export function errorOf(result: unknown[][] | unknown): CellError {
-  const cell = Array.isArray(result) ? (result as unknown[][])[0]![0] : result;
+  const cell = Array.isArray(result) ? firstCell(result as unknown[][]) : result;
   expect(cell).toBeInstanceOf(CellError);
   return cell as CellError;
 }
