@@ -13,7 +13,7 @@
  */
 import { writeFileSync } from 'node:fs';
 import { strToU8, zipSync } from 'fflate';
-import { FLEET, measuredRatio } from '../src/cli/fernhill';
+import { FLEET, measuredRatio } from '../src/demo';
 
 export type FleetFormulas = 'xfmr' | 'shared' | 'native';
 

@@ -3,7 +3,7 @@
  * package and office-addin-manifest's validator posts the manifest to a web service, so this
  * checks by hand what the schemas require of an add-in-only manifest for Excel custom functions.
  *
- * What the checks rest on (stored copies read with the project's search tool):
+ * What the checks rest on (docs/references.md, Add-in manifest and function metadata):
  * - "How to find the proper order of manifest elements",
  *   https://learn.microsoft.com/office/dev/add-ins/develop/manifest-element-ordering — the order of
  *   the children of <OfficeApp xsi:type="TaskPaneApp">.
@@ -66,23 +66,11 @@ export const OFFICE_APP_ORDER = [
   'VersionOverrides',
 ] as const;
 
+/** The children of OFFICE_APP_ORDER a Fluxbook manifest may leave out; it must have every other one. */
+const OFFICE_APP_OPTIONAL: ReadonlySet<string> = new Set(['AlternateId', 'AppDomains', 'Dictionary']);
+
 /** The children Fluxbook's manifest must have (schema-required plus our own requirements, see above). */
-export const OFFICE_APP_REQUIRED = [
-  'Id',
-  'Version',
-  'ProviderName',
-  'DefaultLocale',
-  'DisplayName',
-  'Description',
-  'IconUrl',
-  'HighResolutionIconUrl',
-  'SupportUrl',
-  'Hosts',
-  'Requirements',
-  'DefaultSettings',
-  'Permissions',
-  'VersionOverrides',
-] as const;
+export const OFFICE_APP_REQUIRED = OFFICE_APP_ORDER.filter((name) => !OFFICE_APP_OPTIONAL.has(name));
 
 export const PERMISSIONS = ['Restricted', 'ReadDocument', 'ReadAllDocument', 'WriteDocument', 'ReadWriteDocument'] as const;
 export const MAX_RESOURCE_ID = 32;

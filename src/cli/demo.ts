@@ -4,8 +4,22 @@ import { join } from 'node:path';
 import { SAFETY_NOTE } from '../cells/metadata';
 import type ExcelJS from 'exceljs';
 import { calculateWorkbook, type Calculated, type FormulaResult, type JsonValue } from '../engine/xlsx';
-import { BID_CELLS, bidWorkbook, EVALUATION, OFFER_COLUMNS, OFFER_ROW, OFFERS } from './bids';
-import { FLEET, FLEET_COLUMNS, fleetWorkbook, YEAR_CELLS, YEAR_COOLING, YEAR_UNIT, yearWorkbook } from './fernhill';
+import {
+  BID_CELLS,
+  bidWorkbook,
+  EVALUATION,
+  FLEET,
+  FLEET_COLUMNS,
+  fleetRow,
+  fleetWorkbook,
+  OFFER_COLUMNS,
+  OFFER_ROW,
+  OFFERS,
+  YEAR_CELLS,
+  YEAR_COOLING,
+  YEAR_UNIT,
+  yearWorkbook,
+} from '../demo';
 import { checkOutput, writeAtomically } from './files';
 
 export const FLEET_FILE = 'fernhill-fleet.xlsx';
@@ -69,9 +83,9 @@ export async function demo(options: DemoOptions): Promise<DemoSummary> {
   const rows = FLEET.map((u, i) => ({
     id: u.id,
     location: u.location,
-    ok: fleetCalc.results.find((r) => r.cell === `${c.ratioOk}${i + 2}`)?.value,
-    deviation: numberAt(fleetCalc.results, 'Fleet', `${c.deviation}${i + 2}`),
-    efficiency: numberAt(fleetCalc.results, 'Fleet', `${c.eff50}${i + 2}`),
+    ok: fleetCalc.results.find((r) => r.cell === `${c.ratioOk}${fleetRow(i)}`)?.value,
+    deviation: numberAt(fleetCalc.results, 'Fleet', `${c.deviation}${fleetRow(i)}`),
+    efficiency: numberAt(fleetCalc.results, 'Fleet', `${c.eff50}${fleetRow(i)}`),
   }));
   const worst = rows.reduce((a, b) => (b.efficiency < a.efficiency ? b : a));
   return {

@@ -4,13 +4,15 @@
  * option), printed as one line; 1 an internal fault.
  */
 import { Command, CommanderError } from 'commander';
+import packageJson from '../../package.json';
 import { SAFETY_NOTE } from '../cells/metadata';
 import { calc, type CalcSummary } from './calc';
 import { demo, formatDemoSummary } from './demo';
 import { installSignalHandlers, UsageError } from './files';
 import { restoreTerminal } from './progress';
 
-const VERSION = '0.1.0';
+/** The version npm publishes, read from package.json so the two cannot differ. */
+const VERSION = packageJson.version;
 
 /** Known error codes and what they mean, for the summary line. */
 const CODE_NOTES: Record<string, string> = {

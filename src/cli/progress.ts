@@ -56,13 +56,13 @@ export function progress(show: boolean, stream: NodeJS.WriteStream = process.std
       const d = Math.min(t, Math.max(0, Math.round(done)));
       if (!started) {
         bar.start(t, d, { stage });
-        bar.render(true);
+        (bar as unknown as { render(force: boolean): void }).render(true);
         active = { stream, bar };
         started = true;
       } else if (stage !== current) {
         bar.setTotal(t);
         bar.update(d, { stage });
-        bar.render(true); // a new stage shows at once, not at the next frame
+        (bar as unknown as { render(force: boolean): void }).render(true); // a new stage shows at once, not at the next frame
       } else {
         if (bar.getTotal() !== t) bar.setTotal(t);
         bar.update(d);

@@ -3,13 +3,12 @@
  * call: read, recalculate, write formulas with their values, read again.
  */
 import { describe, expect, it } from 'vitest';
-import { adapt, plainErrors } from '../../src/cells/adapter';
-import { findFunction } from '../../src/cells/catalog';
 import { calculateWorkbook, WorkbookError } from '../../src/engine/xlsx';
+import { xfmr, xfmrRange } from '../support/cells';
 import { fml, handMadeXlsx, num, partText, replacePart, row, str } from './ooxml';
 
-const eff = (...args: unknown[]) => adapt(findFunction('EFF')!, plainErrors)(...args)[0]![0] as number;
-const curve = (...args: unknown[]) => adapt(findFunction('EFFCURVE')!, plainErrors)(...args) as number[][];
+const eff = (...args: unknown[]) => xfmr('EFF', ...args) as number;
+const curve = (...args: unknown[]) => xfmrRange('EFFCURVE', ...args) as number[][];
 
 const recalc = (bytes: Buffer) => calculateWorkbook(bytes);
 const sheetXml = async (bytes: Buffer, n = 1) => partText(bytes, `xl/worksheets/sheet${n}.xml`);

@@ -8,9 +8,9 @@
  *   hot-spot rise Δθh = Hgr · K^y                           IEEE: Δθ_H,R · K^(2m)
  * so a row stores the oil exponent x (= IEEE n) and the winding exponent y (= IEEE 2m).
  *
- * Sources and their status (see REFERENCES.md):
+ * Sources and their status (docs/references.md, Loading and aging):
  *  - IEC rows: IEC 60076-7 Table 4, recommended thermal characteristics for the exponential
- *    equations, from memory (the search tool held no copy of the table). The rows are internally
+ *    equations, from memory. The rows are internally
  *    consistent: each reaches 98 °C hot-spot at rated load and 20 °C ambient (20 + Δθor + Hgr),
  *    which the tests check.
  *  - IEEE rows: exponents n and m from the IEEE C57.91 table of exponents for the temperature
@@ -19,7 +19,6 @@
  *    80 K rated hot-spot rise split 55 K top oil + 25 K gradient (common practice), and borrow the
  *    loss ratio and time constants of the IEC 60076-7 Table 4 row of the same cooling (from memory).
  */
-import { InputError } from '../errors';
 
 /** Cooling modes as IEC 60076-7 groups them; IEEE's OFAF/OFWF are OF, ODAF/ODWF are OD. */
 export type Cooling = 'ONAN' | 'ONAF' | 'OF' | 'OD';
@@ -137,31 +136,6 @@ export const THERMAL_ROWS: readonly ThermalCharacteristics[] = [
   ...Object.values(IEC_POWER),
 ];
 
-const COOLING_NAMES: Readonly<Record<string, Cooling>> = {
-  ONAN: 'ONAN',
-  ONAF: 'ONAF',
-  OF: 'OF',
-  OFAF: 'OF',
-  OFWF: 'OF',
-  OD: 'OD',
-  ODAF: 'OD',
-  ODWF: 'OD',
-};
-
-export function parseCooling(text: string): Cooling {
-  const cooling = COOLING_NAMES[String(text).trim().toUpperCase()];
-  if (cooling === undefined) {
-    throw new InputError('cooling', `"${text}" is not a cooling mode; use "ONAN", "ONAF", "OFAF" (or "OF") or "ODAF" (or "OD")`);
-  }
-  return cooling;
-}
-
-export function parseThermalMethod(text: string): ThermalMethod {
-  const t = String(text).trim().toUpperCase().replace(/[\s_]+/g, '-');
-  if (t === 'IEEE' || t === 'IEC' || t === 'IEC-POWER') return t;
-  throw new InputError('method', `"${text}" is not a loading method; use "IEEE" (C57.91), "IEC" (60076-7) or "IEC-POWER" (60076-7, power-transformer rows)`);
-}
-
 /** The table row for a method and cooling mode (see ThermalMethod for the IEC ONAN choice). */
 export function thermalCharacteristics(method: ThermalMethod, cooling: Cooling): ThermalCharacteristics {
   if (method === 'IEEE') return IEEE_ROWS[cooling];
@@ -172,7 +146,7 @@ export function thermalCharacteristics(method: ThermalMethod, cooling: Cooling):
 /**
  * Normal insulation life of a well-dried, oxygen-free thermally upgraded paper system at the
  * 110 °C reference hot-spot, by end-of-life criterion: the table IEEE C57.91 and IEC 60076-7 both
- * give (confirmed, per REFERENCES.md, in a transformer-life article quoting the IEC 60076-7 table).
+ * give (confirmed in a transformer-life article quoting the IEC 60076-7 table; docs/references.md).
  */
 export const NORMAL_INSULATION_LIFE: readonly { readonly criterion: string; readonly hours: number }[] = [
   { criterion: '50 % retained tensile strength of insulation', hours: 65_000 },
