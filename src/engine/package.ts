@@ -27,13 +27,15 @@ export const MAX_UNPACKED_BYTES = 1024 * MiB;
 export const MAX_PART_BYTES = 500 * MiB;
 
 /**
- * Peak memory of `fluxbook calc` per byte of worksheet XML, measured on the development machine
- * (Node 20, HyperFormula 3.5.0, heap used at its highest): a 100,000-unit fleet of 9 values and
- * 4 XFMR formulas a row, 100 MB of sheet XML → see docs/command-line.md for the figures. The
- * engine's share depends on what the sheet holds (values cost less than formulas that go through
- * HyperFormula); the figure per byte is taken from a sheet where every formula does.
+ * Memory of `fluxbook calc` per byte of worksheet XML, measured on the development machine
+ * (Node 20, HyperFormula 3.5.0, peak resident memory with GNU time): a 100,000-unit fleet of 9
+ * values and 4 filled-down XFMR formulas a row (60 MB of sheet XML) peaks at 0.8 to 1.0 GB, about
+ * 15 bytes a byte; a 1,000,000-row load column with one XFMR formula a row and one over the whole
+ * column (55 MB), which goes through HyperFormula, at 2.9 GB, about 50 a byte, of which the heap
+ * Node's limit counts is a part. 24 a byte lets both run with the default heap and refuses what
+ * would exhaust a small one.
  */
-export const WORKBOOK_MEMORY = { base: 100 * MiB, perSheetByte: 12 } as const;
+export const WORKBOOK_MEMORY = { base: 100 * MiB, perSheetByte: 24 } as const;
 
 export interface PackageCounts {
   /** Sum of the uncompressed sizes the ZIP directory declares, bytes. */
