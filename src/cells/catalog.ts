@@ -9,6 +9,7 @@ import * as current from './functions/current';
 import * as efficiency from './functions/efficiency';
 import * as energy from './functions/energy';
 import * as harmonics from './functions/harmonics';
+import * as loading from './functions/loading';
 import * as losses from './functions/losses';
 import * as ratio from './functions/ratio';
 import * as regulation from './functions/regulation';
@@ -26,6 +27,7 @@ const groups: Record<string, CellFunctionDecl>[] = [
   efficiency,
   energy,
   thermal,
+  loading,
   cost,
   regulation,
   rules,

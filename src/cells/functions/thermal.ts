@@ -1,61 +1,97 @@
 import {
   agingAccelerationFactor,
   equivalentAging,
+  hotSpotAfterStep,
   hotSpotProfile,
-  hotSpotSteady,
   lifeUsedHours,
-  maxLoadForHotSpot,
+  maxSteadyLoad,
+  overloadTime,
   parsePaper,
+  parseThermalMethod,
   relativeAgingRate,
+  steadyHotSpot,
+  steadyTopOil,
+  topOilProfile,
 } from '../../core/thermal';
-import { block, each, num, series, text } from '../declaration';
+import { block, each, num } from '../declaration';
+import {
+  ambient,
+  BEYOND_NAMEPLATE,
+  cooling,
+  GROUP,
+  heatRunBlock,
+  hsGradient,
+  lossRatio,
+  method,
+  modelOf,
+  paper,
+  paperOf,
+  profileArgs,
+  SOURCE,
+  tauOil,
+  tauWinding,
+  thermalArgs,
+  topOilRise,
+  type CoolingArg,
+} from './thermalArguments';
 
-const GROUP = 'Loading and aging';
-const SOURCE = 'IEEE C57.91 clause 7; IEC 60076-7 clause 8 and Table 4 (from memory)';
-
-const cooling = text(
-  'cooling',
-  'Cooling mode: "ONAN", "ONAF", "OFAF" (or "OF"), "ODAF" (or "OD"); sets the exponents, time constants and rated rises.',
-  'ONAN',
-  { default: 'ONAN' },
-);
-const topOilRise = num('top_oil_rise', 'K', "Top-oil rise over ambient at rated load (test report); blank takes the cooling mode's table value.", 55, {
-  optional: true,
-});
-const hsGradient = num('hs_gradient', 'K', "Hot-spot rise over top oil at rated load (test report); blank takes the table value.", 25, {
-  optional: true,
-});
-const lossRatio = num('loss_ratio', 'ratio', 'Load loss at rated current ÷ no-load loss; blank takes the table value.', 5, { optional: true });
-const method = text(
-  'method',
-  '"IEEE" (C57.91 clause 7, default), "IEC" (60076-7; ONAN takes the distribution-transformer row, the other coolings the power-transformer rows) or "IEC-POWER" (60076-7 power-transformer rows for every cooling, ONAN included).',
-  'IEEE',
-  { default: 'IEEE' },
-);
-const paper = text('paper', '"upgraded" (thermally upgraded paper, rate 1 at 110 °C, the default) or "normal" (kraft paper, rate 1 at 98 °C).', 'upgraded', {
-  default: 'upgraded',
-});
 const hotspot = num('hotspot_c', '°C', 'Winding hot-spot temperature, -60 to 250 °C.', 120);
-const loads = series('loads', 'per unit', 'Loading profile: one per-unit load (kVA / nameplate kVA) per step, e.g. 8,760 hourly values.', [
-  0.6, 0.7, 0.9, 1.2, 1.3, 1.1, 0.8, 0.6,
-]);
-const ambients = series('ambients', '°C', 'Ambient temperature: one value for the whole profile or one per step, -60 to 60 °C.', [25]);
-const hours = num('hours', 'h', 'Length of every step of the profile.', 1, { default: 1 });
-const thermalArgs = [cooling, topOilRise, hsGradient, lossRatio, method];
-const profileArgs = [loads, ambients, hours, ...thermalArgs];
+const load = num('load', 'per unit', 'Load as a fraction of nameplate kVA; 1 = full load.', 1);
+const loadBefore = num('load_before', 'per unit', 'Load the unit has carried long enough to settle, before the step (kVA ÷ nameplate kVA).', 0.6);
+const loadAfter = num('load_after', 'per unit', 'Load from the step on.', 1.3);
+
+type Model = [cooling: CoolingArg, topOilRise?: number, hsGradient?: number, lossRatio?: number, method?: string];
+const model = (...[c, top, gradient, ratio, m]: Model) => modelOf(c, m, { topOilRise: top, hotSpotGradient: gradient, lossRatio: ratio });
 
 export const HOTSPOT = each({
   name: 'HOTSPOT',
   group: GROUP,
   help: 'Steady-state winding hot-spot temperature at a constant load: ambient + top-oil rise × [(load² × R + 1)/(R + 1)]^n + hot-spot gradient × load^(2m).',
   source: SOURCE,
-  args: [
-    num('load', 'per unit', 'Load as a fraction of nameplate kVA; 1 = full load.', 1),
-    num('ambient_c', '°C', 'Ambient temperature, -60 to 60 °C.', 30),
-    ...thermalArgs,
-  ],
+  args: [load, ambient, ...thermalArgs],
   result: { type: 'number', unit: '°C' },
-  compute: hotSpotSteady,
+  compute: (k: number, a: number, ...m: Model) => steadyHotSpot(model(...m), k, a),
+});
+
+export const TOPOIL = each({
+  name: 'TOPOIL',
+  group: GROUP,
+  help: 'Steady-state top-oil temperature at a constant load: ambient + top-oil rise × [(load² × R + 1)/(R + 1)]^n. With the hot-spot gradient × load^(2m) it makes XFMR.HOTSPOT.',
+  source: SOURCE,
+  args: [load, ambient, cooling, topOilRise, lossRatio, method],
+  result: { type: 'number', unit: '°C' },
+  compute: (k: number, a: number, c: CoolingArg, top?: number, ratio?: number, m?: string) => steadyTopOil(modelOf(c, m, { topOilRise: top, lossRatio: ratio }), k, a),
+});
+
+const stepModel = (c: CoolingArg, top?: number, gradient?: number, ratio?: number, tauO?: number, tauW?: number, m?: string) =>
+  modelOf(c, m, { topOilRise: top, hotSpotGradient: gradient, lossRatio: ratio, oilTimeConstant: tauO, windingTimeConstant: tauW });
+const stepArgs = [cooling, topOilRise, hsGradient, lossRatio, tauOil, tauWinding, method];
+type StepModel = Parameters<typeof stepModel>;
+
+export const HOTSPOTSTEP = each({
+  name: 'HOTSPOTSTEP',
+  group: GROUP,
+  help: `Hot-spot temperature \`hours\` after the load steps from load_before (settled) to load_after at a constant ambient: the step-load check of the loading guides (IEEE C57.91 clause 7 exponentials with its top-oil time constant for n ≠ 1; the IEC 60076-7 equations for the IEC methods). ${BEYOND_NAMEPLATE}`,
+  source: `${SOURCE}; IEEE C57.91 clause 7 top-oil time constant (from memory)`,
+  args: [loadBefore, loadAfter, num('hours', 'h', 'Time since the step, 0 or more.', 4), ambient, ...stepArgs],
+  result: { type: 'number', unit: '°C' },
+  compute: (k1: number, k2: number, h: number, a: number, ...m: StepModel) => hotSpotAfterStep(stepModel(...m), k1, k2, h, a),
+});
+
+export const OVERLOADTIME = each({
+  name: 'OVERLOADTIME',
+  group: GROUP,
+  help: `Hours after a step from load_before (settled) to load_after until the hot-spot first reaches limit_c; 0 when it is there from the start; #NUM! with the temperature it settles at when it never gets there. A root search on the step response (about 110 evaluations of the closed form). ${BEYOND_NAMEPLATE}`,
+  source: `${SOURCE}; IEEE C57.91 clause 7 top-oil time constant (from memory)`,
+  args: [
+    loadBefore,
+    loadAfter,
+    ambient,
+    num('limit_c', '°C', 'Hot-spot limit, 60 to 200 °C and above ambient_c: 120 °C (default) for normal loading, 140 °C long-time emergency, 180 °C IEEE short-time emergency.', 140, { default: 120 }),
+    ...stepArgs,
+  ],
+  result: { type: 'number', unit: 'h' },
+  compute: (k1: number, k2: number, a: number, limit: number, ...m: StepModel) => overloadTime(stepModel(...m), k1, k2, a, limit).hours,
 });
 
 export const FAA = each({
@@ -73,39 +109,58 @@ export const AGERATE = each({
   group: GROUP,
   help: 'Relative aging rate of the insulation paper: for "upgraded" paper the aging acceleration factor (1 at 110 °C); for "normal" kraft paper 2^((hotspot_c − 98)/6) (1 at 98 °C, doubling every 6 K).',
   source: 'IEC 60076-7 relative aging rate; IEEE C57.91 clause 5 (from memory)',
-  args: [hotspot, paper],
+  args: [hotspot, { ...paper, help: '"upgraded" (thermally upgraded paper, rate 1 at 110 °C, the default) or "normal" (kraft paper, rate 1 at 98 °C).', optional: true, default: 'upgraded' }],
   result: { type: 'number', unit: 'per unit of normal aging' },
   compute: (hotSpotC: number, paperText: string) => relativeAgingRate(hotSpotC, parsePaper(paperText)),
 });
 
+type Profile = [loads: Float64Array, ambients: Float64Array, hours: number, ...model: Model];
+
 export const HOTSPOTS = block({
   name: 'HOTSPOTS',
   group: GROUP,
-  help: 'Spills the hot-spot temperature over a loading profile, one row per step (the value at the end of the step), for a chart. Starts from the steady state of the first load; each step solved exactly for its load and ambient.',
+  help: 'Spills the hot-spot temperature over a loading profile, one row per step (the value at the end of the step), for a chart beside XFMR.TOPOILS. Starts from the steady state of the first load; each step solved exactly for its load and ambient.',
   source: SOURCE,
   args: profileArgs,
   result: { type: 'number', unit: '°C', columns: ['hot-spot (°C)'] },
-  compute: (...a: Parameters<typeof hotSpotProfile>) => Array.from(hotSpotProfile(...a), (t) => [t]),
+  compute: (l: Float64Array, a: Float64Array, h: number, ...m: Model) => Array.from(hotSpotProfile(model(...m), l, a, h), (t) => [t]),
 });
+
+export const TOPOILS = block({
+  name: 'TOPOILS',
+  group: GROUP,
+  help: 'Spills the top-oil temperature over a loading profile, one row per step (the value at the end of the step), with the same arguments as XFMR.HOTSPOTS so the two series chart side by side.',
+  source: SOURCE,
+  args: profileArgs,
+  result: { type: 'number', unit: '°C', columns: ['top-oil (°C)'] },
+  compute: (l: Float64Array, a: Float64Array, h: number, ...m: Model) => Array.from(topOilProfile(model(...m), l, a, h), (t) => [t]),
+});
+
+const agingCompute =
+  (f: typeof equivalentAging) =>
+  (...[l, a, h, c, top, gradient, ratio, m, p]: [...Profile, paper?: string]) => {
+    const unit = model(c, top, gradient, ratio, m);
+    return f(unit, l, a, h, paperOf(unit, p));
+  };
 
 export const FEQA = each({
   name: 'FEQA',
   group: GROUP,
-  help: 'Equivalent aging factor over a loading profile: Σ aging rate × hours ÷ Σ hours; 1 means the insulation aged as fast as at the reference hot-spot (110 °C upgraded paper, 98 °C normal).',
+  help: 'Equivalent aging factor over a loading profile: Σ ∫ aging rate dt ÷ Σ hours, the rate integrated along each step\'s hot-spot curve; 1 means the insulation aged as fast as at the paper\'s reference hot-spot (110 °C upgraded, 98 °C normal).',
   source: `${SOURCE}; IEEE C57.91 clause 5 equivalent aging (from memory)`,
   args: [...profileArgs, paper],
   result: { type: 'number', unit: 'per unit of normal aging' },
-  compute: equivalentAging,
+  compute: agingCompute(equivalentAging),
 });
 
 export const LIFEUSED = each({
   name: 'LIFEUSED',
   group: GROUP,
-  help: 'Insulation life consumed over a loading profile, in hours of normal aging (Σ aging rate × hours). Divide by the normal life for a fraction: 180,000 h for thermally upgraded paper at 110 °C (IEEE C57.91 / IEC 60076-7 normal-life table).',
+  help: "Insulation life consumed over a loading profile, in hours at the paper's reference hot-spot (Σ ∫ aging rate dt). Divide by the normal life for a fraction: 180,000 h (IEEE C57.91 / IEC 60076-7 normal-life table), or the heat-run block's figure.",
   source: `${SOURCE}; IEEE C57.91 clause 5 loss of life (from memory)`,
   args: [...profileArgs, paper],
   result: { type: 'number', unit: 'h' },
-  compute: lifeUsedHours,
+  compute: agingCompute(lifeUsedHours),
 });
 
 export const MAXLOAD = each({
@@ -114,10 +169,71 @@ export const MAXLOAD = each({
   help: 'Largest constant per-unit load whose steady hot-spot reaches limit_c at this ambient (the root of the HOTSPOT equation). #NUM! when even no load reaches the limit.',
   source: SOURCE,
   args: [
-    num('ambient_c', '°C', 'Ambient temperature, -60 to 60 °C.', 30),
+    ambient,
     num('limit_c', '°C', 'Hot-spot limit, 60 to 200 °C: 110 °C is rated for upgraded paper (IEEE), 98 °C for normal paper (IEC).', 110, { default: 110 }),
     ...thermalArgs,
   ],
   result: { type: 'number', unit: 'per unit' },
-  compute: maxLoadForHotSpot,
+  compute: (a: number, limit: number, ...m: Model) => maxSteadyLoad(model(...m), a, limit),
+});
+
+const opt = (name: string, unit: string, help: string, sample: number) => num(name, unit, help, sample, { optional: true });
+
+export const HEATRUN = block({
+  name: 'HEATRUN',
+  group: GROUP,
+  help: "Spills a unit's thermal data as a labelled block of 14 rows — method, cooling, rated rises, loss ratio, time constants, exponents, k11 k21 k22, paper and normal life — with the table row's value wherever an argument is blank. Type a unit's heat-run report once here; give the block in place of the cooling name to every other thermal function.",
+  source: `${SOURCE}; the unit's own data where given`,
+  args: [
+    { ...cooling, help: 'Cooling mode: "ONAN", "ONAF", "OFAF" (or "OF"), "ODAF" (or "OD").' },
+    { ...method, help: '"IEEE" (default), "IEC" or "IEC-POWER": which guide\'s table row and equations.', default: 'IEEE' },
+    topOilRise,
+    hsGradient,
+    opt('hs_factor', 'ratio', 'IEC hot-spot factor H from the heat-run report; when given, hs_gradient is read as the average winding gradient gr and the hot-spot gradient is H·gr.', 1.1),
+    lossRatio,
+    tauOil,
+    tauWinding,
+    opt('n', 'exponent', 'Oil exponent n (IEC x), 0.5 to 2.', 0.8),
+    opt('m', 'exponent', 'Winding exponent m (IEC y/2): the hot-spot gradient goes as load^(2m).', 0.8),
+    opt('k11', 'ratio', 'IEC thermal-model constant k11 (1 for IEEE).', 1),
+    opt('k21', 'ratio', 'IEC thermal-model constant k21, 1 or more (1 for IEEE).', 1),
+    opt('k22', 'ratio', 'IEC thermal-model constant k22 (1 for IEEE).', 1),
+    paper,
+    opt('normal_life_h', 'h', "Normal insulation life at the paper's reference hot-spot; blank: 180,000 h.", 180_000),
+  ],
+  result: { type: 'text', unit: 'label and value', columns: ['quantity', 'value'] },
+  compute: (
+    c: string,
+    m: string,
+    top?: number,
+    gradient?: number,
+    factor?: number,
+    ratio?: number,
+    tauO?: number,
+    tauW?: number,
+    n?: number,
+    mm?: number,
+    k11?: number,
+    k21?: number,
+    k22?: number,
+    p?: string,
+    life?: number,
+  ) => {
+    const unit = modelOf(c, m, {
+      topOilRise: top,
+      hotSpotGradient: gradient,
+      hotSpotFactor: factor,
+      lossRatio: ratio,
+      oilTimeConstant: tauO,
+      windingTimeConstant: tauW,
+      oilExponent: n,
+      windingExponentM: mm,
+      k11,
+      k21,
+      k22,
+      paper: p === undefined ? undefined : parsePaper(p),
+      normalLifeHours: life,
+    });
+    return heatRunBlock(parseThermalMethod(m), unit);
+  },
 });

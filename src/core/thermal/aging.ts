@@ -10,9 +10,7 @@
  */
 import { InputError } from '../errors';
 import { nonNegative, positive, within } from '../guards';
-import { NORMAL_LIFE_HOURS } from './coolingTable';
-
-export type Paper = 'upgraded' | 'normal';
+import { NORMAL_LIFE_HOURS, type Paper } from './coolingTable';
 
 /** Arrhenius constant B = 15000 K and reference 110 °C = 383 K of the F_AA law. */
 const B = 15000;
