@@ -8,6 +8,7 @@ import { cpus } from 'node:os';
 import { adapterOverhead } from './adapter';
 import { agingBenchmark } from './aging';
 import { bundleSize } from './bundle';
+import { cyclicBenchmark } from './cyclic';
 import { fleetBenchmark } from './fleet';
 import { printTable } from './harness';
 
@@ -18,7 +19,8 @@ async function main(): Promise<void> {
   const fleet = fleetBenchmark();
   const adapter = await adapterOverhead();
   const aging = await agingBenchmark();
-  const rows = [...fleet.rows, ...adapter, ...aging, bundleSize()];
+  const cyclic = await cyclicBenchmark();
+  const rows = [...fleet.rows, ...adapter, ...aging, ...cyclic, bundleSize()];
   console.log('');
   printTable(rows);
   const missed = rows.filter((r) => !r.met);
