@@ -86,7 +86,7 @@ export const LOADCHECK = block({
 export const CYCLICMAX = each({
   name: 'CYCLICMAX',
   group: GROUP,
-  help: `The largest factor by which the whole loading profile can be multiplied and still pass XFMR.LOADOK — how much more load the unit can take on the same cycle. A root search: 8 to 14 runs of the profile as a rule, never more than 40 (an 8,760-hour year included). #NUM! when even no load passes. ${BEYOND_NAMEPLATE}`,
+  help: `The largest factor by which the whole loading profile can be multiplied and still pass XFMR.LOADOK — how much more load the unit can take on the same cycle. Two root searches (temperatures, then aging): 7 to 12 runs of the profile as a rule, never more than 40, an 8,760-hour year included. #NUM! when even no load passes. ${BEYOND_NAMEPLATE}`,
   source: LIMITS_SOURCE,
   args: checkArgs,
   result: { type: 'number', unit: 'factor on the profile' },
