@@ -2,9 +2,8 @@
  * Currents and apparent power. Three-phase: S = √3·V_LL·I; single-phase: S = V·I (common
  * practice). Ratings in kVA, voltages in V line-to-line, currents in A.
  */
-import { InputError } from './errors';
-import { perUnitImpedance, phaseCount, positive } from './guards';
-import { parseVectorGroup } from './vectorGroup';
+import { oneOf, perUnitImpedance, phaseCount, positive } from './guards';
+import { parseVectorGroup, type Connection } from './vectorGroup';
 
 const SQRT3 = Math.sqrt(3);
 
@@ -25,13 +24,10 @@ export function windingCurrent(kva: number, volts: number, connection: string, p
   return connectionOf(connection) === 'D' ? line / SQRT3 : line;
 }
 
-function connectionOf(text: string): 'D' | 'Y' | 'Z' {
-  const t = String(text).trim().toUpperCase();
-  if (t === 'D') return 'D';
-  if (t === 'Y' || t === 'YN') return 'Y';
-  if (t === 'Z' || t === 'ZN') return 'Z';
-  if (/\d$/.test(t)) return parseVectorGroup('vector_letter', text).hv;
-  throw new InputError('vector_letter', `"${text}" is not a winding connection; use D, Y, YN, Z or ZN`);
+/** A winding's connection letter (YN and ZN name the neutral), or a whole vector group's HV letter. */
+function connectionOf(text: string): Connection {
+  if (/\d\s*$/.test(String(text))) return parseVectorGroup('vector_letter', text).hv;
+  return oneOf('vector_letter', text, ['D', 'Y', 'Z'] as const, { YN: 'Y', ZN: 'Z' });
 }
 
 export function apparentPowerKva(amps: number, volts: number, phases: number): number {

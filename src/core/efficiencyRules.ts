@@ -6,7 +6,7 @@
  * paragraph it comes from; the reference tests re-read every row against the printed tables.
  */
 import { InputError, NotInTableError, shown } from './errors';
-import { nonNegative, oneOf, phaseCount, positive } from './guards';
+import { nonNegative, phaseCount, positive } from './guards';
 
 // ---------------------------------------------------------------------------------------------
 // US DOE, 10 CFR 431.196
@@ -151,12 +151,6 @@ export const DOE_TABLES: readonly DoeTable[] = Object.freeze([
   ...mvTables(2029, 3, '431.196(c)(3)', MVDRY_2029_3),
 ]);
 
-const DOE_KINDS: readonly DoeKind[] = ['liquid', 'submersible', 'lvdry', 'mvdry'];
-
-export function parseDoeKind(text: string): DoeKind {
-  return oneOf('kind', text, DOE_KINDS);
-}
-
 export function parseDoeLevels(value: number): DoeLevels {
   if (value === 2016 || value === 2029) return value;
   throw new InputError('levels', `must be 2016 (units made from 1 January 2016) or 2029 (from 23 April 2029) (got ${shown(value)})`);
@@ -207,17 +201,16 @@ function describeDoe(t: DoeTable): string {
 }
 
 /** The DOE table a unit falls under. */
-export function doeTableFor(kindText: string, phases: number, levels: number, bilKv: number | undefined): DoeTable {
-  const kind = parseDoeKind(kindText);
+export function doeTableFor(kind: DoeKind, phases: number, levels: number, bilKv: number | undefined): DoeTable {
   const p = phaseCount('phases', phases);
   const l = parseDoeLevels(levels);
   return findDoeTable(kind, p, l, kind === 'mvdry' ? bilBand(bilKv) : undefined);
 }
 
 /** Minimum efficiency (fraction) at the regulation's test load and power factor 1. */
-export function doeMinimumEfficiency(kva: number, kindText: string, phases: number, levels: number, bilKv: number | undefined): number {
+export function doeMinimumEfficiency(kva: number, kind: DoeKind, phases: number, levels: number, bilKv: number | undefined): number {
   const s = positive('kva', kva);
-  const t = doeTableFor(kindText, phases, levels, bilKv);
+  const t = doeTableFor(kind, phases, levels, bilKv);
   const rows = t.rows.map((r) => ({ kva: r.kva, value: r.percent }));
   return interpolate(rows, s, describeDoe(t)) / 100;
 }
@@ -276,20 +269,13 @@ const EU_MEDIUM_POWER_MIN_KVA = 5;
 
 export type EuLoss = 'pk' | 'p0';
 
-export function parseEuLoss(text: string): EuLoss {
-  const t = String(text).trim().toLowerCase();
-  if (t === 'po') return 'p0'; // the regulation writes Po
-  return oneOf('which', t, ['pk', 'p0'] as const);
-}
-
 /**
  * Maximum Tier 2 loss in W for a rating. The "≤ 25" row holds from 5 to 25 kVA; between rows the
  * limit is interpolated linearly, as Annex I directs for intermediate ratings (from memory).
  * Above 3150 kVA the regulation sets a minimum peak efficiency index instead: no row.
  */
-export function euMaximumLoss(kva: number, whichText: string): number {
+export function euMaximumLoss(kva: number, which: EuLoss): number {
   const s = positive('kva', kva);
-  const which = parseEuLoss(whichText);
   if (s < EU_MEDIUM_POWER_MIN_KVA) {
     throw new NotInTableError('kva', `${shown(s)} kVA is below 5 kVA, the smallest medium power transformer of EU 548/2014`);
   }
@@ -323,8 +309,8 @@ export function meetsEfficiencyRule(
   kva: number,
   p0Watts: number,
   pkWatts: number,
-  ruleText: string,
-  kindText: string,
+  rule: Rule,
+  kind: DoeKind,
   phases: number,
   levels: number,
   bilKv: number | undefined,
@@ -332,15 +318,13 @@ export function meetsEfficiencyRule(
   const s = positive('kva', kva);
   const p0 = nonNegative('p0_w', p0Watts);
   const pk = nonNegative('pk_w', pkWatts);
-  const rule = oneOf('rule', ruleText, ['DOE', 'EU', 'both'] as const);
   let ok = true;
   if (rule !== 'EU') {
-    const t = doeTableFor(kindText, phases, levels, bilKv);
-    const minimum = doeMinimumEfficiency(s, kindText, phases, levels, bilKv);
+    const t = doeTableFor(kind, phases, levels, bilKv);
+    const minimum = doeMinimumEfficiency(s, kind, phases, levels, bilKv);
     ok = ok && efficiencyAtTestLoad(s, p0, pk, t.testLoad) >= minimum;
   }
   if (rule !== 'DOE') {
-    const kind = parseDoeKind(kindText);
     if (kind !== 'liquid' || phaseCount('phases', phases) !== 3) {
       throw new NotInTableError('kind', 'the EU Tier 2 table in Fluxbook covers three-phase liquid-immersed units only');
     }

@@ -4,7 +4,7 @@ import { adapt, CellError, plainErrors } from '../../src/cells/adapter';
 import { findFunction } from '../../src/cells/catalog';
 import { AMBIENTW, CYCLICMAX, LOADCHECK, LOADLIMITS, LOADOK } from '../../src/cells/functions/loading';
 import { HEATRUN, HOTSPOT, HOTSPOTS, HOTSPOTSTEP, OVERLOADTIME, TOPOIL, TOPOILS } from '../../src/cells/functions/thermal';
-import { cyclicMax, IEEE_ROWS, parseCooling, parseThermalMethod, thermalModel, ultimateHotSpotGradient } from '../../src/core/thermal';
+import { cyclicMax, IEEE_ROWS, thermalModel, ultimateHotSpotGradient, type Cooling, type ThermalMethod } from '../../src/core/thermal';
 
 const hotspot = adapt(HOTSPOT, plainErrors);
 const topoil = adapt(TOPOIL, plainErrors);
@@ -68,7 +68,7 @@ describe('steady state', () => {
 
   it('TOPOIL + hot-spot gradient × load^(2m) = HOTSPOT (property)', () => {
     fc.assert(
-      fc.property(fc.double({ min: 0, max: 2.5, noNaN: true }), fc.double({ min: -30, max: 50, noNaN: true }), fc.constantFrom('ONAN', 'ONAF', 'OFAF', 'ODAF'), fc.constantFrom('IEEE', 'IEC', 'IEC-POWER'), (k, a, c, m) => {
+      fc.property(fc.double({ min: 0, max: 2.5, noNaN: true }), fc.double({ min: -30, max: 50, noNaN: true }), fc.constantFrom<Cooling>('ONAN', 'ONAF', 'OF', 'OD'), fc.constantFrom<ThermalMethod>('IEEE', 'IEC', 'IEC-POWER'), (k, a, c, m) => {
         const top = value(topoil(k, a, c, null, null, m)) as number;
         const hot = value(hotspot(k, a, c, null, null, null, m)) as number;
         const gradient = hot - top;
@@ -80,7 +80,7 @@ describe('steady state', () => {
   });
 });
 
-const findModel = (c: string, m: string) => thermalModel(parseThermalMethod(m), parseCooling(c));
+const findModel = (c: Cooling, m: ThermalMethod) => thermalModel(m, c);
 
 describe('step load', () => {
   it('HOTSPOTSTEP: 0.6 → 1.3 pu for 4 h at 30 °C reaches 137.7 °C (IEEE C57.91 clause 7 time constant)', () => {
@@ -249,5 +249,58 @@ describe('heat-run block', () => {
   it('refuses a bad heat-run value by its argument name', () => {
     expect(errorOf(heatrun('ONAN', 'IEEE', null, null, null, null, null, null, 5)).message).toMatch(/^argument n:/);
     expect(errorOf(heatrun('ONAN', 'IEEE', null, null, 1.3)).message).toMatch(/^argument hs_factor:/);
+  });
+});
+
+describe('heat-run block in place of the cooling name', () => {
+  // A unit's heat-run report typed once: IEEE, ONAN, 52 K top oil, 24 K gradient, R = 7.8.
+  const unit = heatrun('ONAN', 'IEEE', 52, 24, null, 7.8);
+  const own = [52, 24, 7.8] as const;
+
+  it('gives every thermal function the same answer as the values typed into its own arguments', () => {
+    expect(value(hotspot(1.2, 30, unit))).toBe(value(hotspot(1.2, 30, 'ONAN', ...own)));
+    expect(value(topoil(1.2, 30, unit))).toBe(value(topoil(1.2, 30, 'ONAN', 52, 7.8)));
+    expect(value(step(0.6, 1.3, 2, 30, unit))).toBe(value(step(0.6, 1.3, 2, 30, 'ONAN', ...own)));
+    expect(value(overload(0.6, 1.3, 30, 140, unit))).toBe(value(overload(0.6, 1.3, 30, 140, 'ONAN', ...own)));
+    expect(hotspots(column(day), 30, 1, unit)).toEqual(hotspots(column(day), 30, 1, 'ONAN', ...own));
+    expect(check(column(press), 30, 1, 'normal', 'distribution', unit)).toEqual(check(column(press), 30, 1, 'normal', 'distribution', 'ONAN', ...own));
+    expect(value(cyclic(column(press), 30, 1, 'normal', 'distribution', unit))).toBe(value(cyclic(column(press), 30, 1, 'normal', 'distribution', 'ONAN', ...own)));
+  });
+
+  it('carries the time constants, exponents, k11 k21 k22, paper and normal life that no other argument list has', () => {
+    const iec = heatrun('ONAF', 'IEC', null, null, null, null, 120, 6, 0.85, 0.7, 0.6, 1.8, 1.5, 'upgraded', 150000);
+    const slower = heatrun('ONAF', 'IEC');
+    expect(value(step(0.6, 1.4, 1, 20, iec))).not.toBe(value(step(0.6, 1.4, 1, 20, slower)));
+    const r = check(column(day), 20, 1, 'normal', 'medium', iec);
+    const feqa = adapt(findFunction('FEQA')!, plainErrors);
+    expect(row(r, 'F_EQA')).toBeCloseTo(value(feqa(column(day), 20, 1, iec)) as number, 12);
+    expect(row(r, 'life used (fraction of normal life)')).toBeCloseTo((row(r, 'life used (h)') as number) / 150000, 15);
+  });
+
+  it("takes the block's method when method is blank and refuses a different one", () => {
+    const iec = heatrun('ONAN', 'IEC');
+    expect(value(hotspot(1, 20, iec))).toBeCloseTo(98, 12);
+    expect(value(hotspot(1, 20, iec, null, null, null, 'IEC'))).toBeCloseTo(98, 12);
+    expect(errorOf(hotspot(1, 20, iec, null, null, null, 'IEEE')).message).toMatch(/^argument method: "IEEE" contradicts the heat-run block in cooling/);
+  });
+
+  it("lets a value in the formula's own arguments replace the block's", () => {
+    expect(value(hotspot(1, 30, unit, 55, 25, 5))).toBe(110);
+  });
+
+  it('refuses a range that is not a heat-run block, naming cooling and the row', () => {
+    expect(errorOf(hotspot(1, 30, [['ONAN', 1], ['x', 2]])).message).toMatch(/^argument cooling: a 2×2 range is not a heat-run block/);
+    const relabelled = unit.map((r, i) => (i === 3 ? ['gradient', r[1]] : r));
+    expect(errorOf(hotspot(1, 30, relabelled)).message).toMatch(/^argument cooling: row 4 \("hot-spot gradient \(K\)"\) is labelled "gradient"/);
+    const bad = unit.map((r, i) => (i === 7 ? [r[0], 9] : r));
+    expect(errorOf(hotspot(1, 30, bad)).message).toMatch(/^argument cooling: heat-run block: n: /);
+    const noText = unit.map((r, i) => (i === 1 ? [r[0], 'fan'] : r));
+    expect(errorOf(hotspot(1, 30, noText)).message).toMatch(/^argument cooling: heat-run block: cooling: "fan" is not one of/);
+  });
+
+  it('is read whole, never broadcast: a column of loads beside it still spills one value per load', () => {
+    const r = hotspot(column([0.5, 1, 1.5]), 30, unit);
+    expect(r).toHaveLength(3);
+    expect(r[1]![0]).toBe(value(hotspot(1, 30, 'ONAN', ...own)));
   });
 });

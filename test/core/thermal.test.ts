@@ -13,9 +13,6 @@ import {
   lifeUsedHours,
   loadingYear,
   maxSteadyLoad,
-  parseCooling,
-  parsePaper,
-  parseThermalMethod,
   relativeAgingRate,
   steadyHotSpot,
   THERMAL_ROWS,
@@ -39,30 +36,11 @@ function argumentOf(fn: () => unknown): string {
 }
 
 describe('choosing the table row', () => {
-  it('reads cooling names case-insensitively, with IEEE and IEC spellings', () => {
-    expect(parseCooling(' onan ')).toBe('ONAN');
-    expect(parseCooling('Onaf')).toBe('ONAF');
-    expect(parseCooling('OFAF')).toBe('OF');
-    expect(parseCooling('of')).toBe('OF');
-    expect(parseCooling('ODAF')).toBe('OD');
-    expect(parseCooling('od')).toBe('OD');
-  });
-
-  it('refuses an unknown cooling, naming cooling', () => {
-    expect(argumentOf(() => parseCooling('AN'))).toBe('cooling');
-  });
-
-  it('reads the method, refusing others by name', () => {
-    expect(parseThermalMethod('ieee')).toBe('IEEE');
-    expect(parseThermalMethod('iec power')).toBe('IEC-POWER');
-    expect(argumentOf(() => parseThermalMethod('ANSI'))).toBe('method');
-  });
-
   it('takes the IEC distribution row for IEC ONAN and the power rows otherwise', () => {
     expect(thermalModel('IEC', 'ONAN')).toBe(IEC_DISTRIBUTION_ONAN);
     expect(thermalModel('IEC-POWER', 'ONAN')).toBe(IEC_POWER.ONAN);
     expect(thermalModel('IEC', 'ONAF')).toBe(IEC_POWER.ONAF);
-    expect(thermalModel('IEEE', parseCooling('ODAF'))).toBe(IEEE_ROWS.OD);
+    expect(thermalModel('IEEE', 'OD')).toBe(IEEE_ROWS.OD);
     expect(thermalModel('IEEE', 'ONAN', { topOilRise: undefined })).toBe(IEEE_ROWS.ONAN);
   });
 
@@ -245,10 +223,7 @@ describe('profiles: checks, aging and life', () => {
     expect(lifeUsedHours(IEEE_ROWS.ONAF, loads, one(25), 1000) / 4000).toBeCloseTo(feqa, 12);
   });
 
-  it('reads the paper kind and refuses others by name', () => {
-    expect(parsePaper('Thermally upgraded')).toBe('upgraded');
-    expect(parsePaper('KRAFT')).toBe('normal');
-    expect(argumentOf(() => parsePaper('linen'))).toBe('paper');
+  it('refuses a hot-spot outside the aging laws, by name', () => {
     expect(relativeAgingRate(110, 'upgraded')).toBe(1);
     expect(argumentOf(() => agingAccelerationFactor(400))).toBe('hotspot_c');
   });

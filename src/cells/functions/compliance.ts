@@ -1,5 +1,6 @@
 import { meetsEfficiencyRule } from '../../core/efficiencyRules';
-import { each, num, text } from '../declaration';
+import { bil, doeKind, doeLevels, kva, p0, phases, pk, withSample } from '../arguments';
+import { choice, each } from '../declaration';
 
 /** Kept in its own group file so it stands at the end of the catalog. */
 export const COMPLIES = each({
@@ -8,14 +9,14 @@ export const COMPLIES = each({
   help: 'TRUE when test-report losses meet the rule: "DOE" (efficiency at the test load ≥ DOEMIN), "EU" (p0_w and pk_w ≤ EUMAXLOSS, three-phase liquid only) or "both". Losses at each rule’s reference temperature.',
   source: '10 CFR 431.196 and EU Regulation 548/2014 Annex I Table I.1 Tier 2 (EU values from memory)',
   args: [
-    num('kva', 'kVA', 'Nameplate rating.', 500),
-    num('p0_w', 'W', 'No-load loss from the test report.', 420),
-    num('pk_w', 'W', 'Load loss at rated current from the test report, at the rule’s reference temperature.', 3800),
-    text('rule', '"DOE", "EU" or "both".', 'both'),
-    text('kind', '"liquid", "submersible", "lvdry" or "mvdry".', 'liquid', { default: 'liquid' }),
-    num('phases', 'phases', '1 or 3.', 3, { default: 3 }),
-    num('levels', 'year', 'DOE levels: 2016 or 2029.', 2016, { default: 2016 }),
-    num('bil_kv', 'kV', 'Basic impulse level; needed for "mvdry" only.', 95, { optional: true }),
+    withSample(kva, 500),
+    withSample(p0, 420),
+    withSample(pk, 3800),
+    choice('rule', '"DOE", "EU" or "both".', { options: ['DOE', 'EU', 'both'] }),
+    doeKind,
+    phases,
+    doeLevels,
+    bil,
   ],
   result: { type: 'boolean', unit: 'TRUE/FALSE' },
   compute: meetsEfficiencyRule,

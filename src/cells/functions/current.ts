@@ -1,10 +1,8 @@
 import { apparentPowerKva, faultCurrent, ratedCurrent, windingCurrent } from '../../core/current';
+import { impedance, kva, phases, volts } from '../arguments';
 import { each, num, text } from '../declaration';
 
 const GROUP = 'Current and power';
-const kva = num('kva', 'kVA', 'Nameplate rating.', 1000);
-const volts = num('v', 'V', 'Voltage, line-to-line for three-phase.', 480);
-const phases = num('phases', 'phases', '1 or 3.', 3, { default: 3 });
 
 export const IRATED = each({
   name: 'IRATED',
@@ -49,7 +47,7 @@ export const ISC = each({
   args: [
     kva,
     volts,
-    num('z', 'fraction', 'Impedance as a percentage of the rating, e.g. 5.75%.', 0.0575),
+    impedance,
     num('source_mva', 'MVA', 'Short-circuit power of the supply; blank for an infinite source.', 500, { optional: true }),
     phases,
   ],

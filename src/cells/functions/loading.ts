@@ -1,25 +1,26 @@
-import { cyclicMax, GAS_BUBBLE_CAUTION_C, loadingLimits, parseThermalMethod, profileCheck, weightedAmbient } from '../../core/thermal';
-import { block, each, series, text } from '../declaration';
-import { BEYOND_NAMEPLATE, category, checkArgs, GROUP, modelOf, parseCategory, parseSize, size, type CoolingArg } from './thermalArguments';
+import { cyclicMax, GAS_BUBBLE_CAUTION_C, loadingLimits, profileCheck, weightedAmbient, type LoadingCategory, type ThermalMethod, type UnitSize } from '../../core/thermal';
+import { thermalMethod } from '../arguments';
+import { block, each, series } from '../declaration';
+import { BEYOND_NAMEPLATE, category, checkArgs, GROUP, modelOf, size, type CoolingArg } from './thermalArguments';
 
 type Check = [
   loads: Float64Array,
   ambients: Float64Array,
   hours: number,
-  category: string,
-  size: string,
+  category: LoadingCategory,
+  size: UnitSize,
   cooling: CoolingArg,
-  topOilRise?: number,
-  hsGradient?: number,
-  lossRatio?: number,
-  method?: string,
+  topOilRise: number | undefined,
+  hsGradient: number | undefined,
+  lossRatio: number | undefined,
+  method: ThermalMethod | undefined,
 ];
 
 const LIMITS_SOURCE = 'IEEE C57.91 loading categories; IEC 60076-7:2005 Table 4 (both from memory; docs/references.md)';
 
 function checked(...[l, a, h, cat, sz, c, top, gradient, ratio, m]: Check) {
   const unit = modelOf(c, m, { topOilRise: top, hotSpotGradient: gradient, lossRatio: ratio });
-  return { unit, report: profileCheck(unit, l, a, h, parseCategory(cat), parseSize(sz)) };
+  return { unit, report: profileCheck(unit, l, a, h, cat, sz) };
 }
 
 export const LOADLIMITS = block({
@@ -27,11 +28,10 @@ export const LOADLIMITS = block({
   group: GROUP,
   help: `Spills the limits a loading category allows — top-oil, hot-spot, load per unit, whether normal aging (F_EQA ≤ 1) is also required — with the guide's name for it, the ${GAS_BUBBLE_CAUTION_C} °C gas-bubble caution and the source. IEEE C57.91 categories for method "IEEE", IEC 60076-7 for "IEC"/"IEC-POWER". ${BEYOND_NAMEPLATE}`,
   source: LIMITS_SOURCE,
-  args: [category, size, text('method', '"IEEE" (C57.91, default) or "IEC" / "IEC-POWER" (60076-7): whose categories.', 'IEEE', { default: 'IEEE' })],
+  args: [category, size, thermalMethod],
   result: { type: 'text', unit: 'label and value', columns: ['limit', 'value'] },
-  compute: (cat: string, sz: string, m: string) => {
-    const method = parseThermalMethod(m);
-    const l = loadingLimits(method === 'IEEE' ? 'IEEE' : 'IEC', parseCategory(cat), parseSize(sz));
+  compute: (cat, sz, m) => {
+    const l = loadingLimits(m === 'IEEE' ? 'IEEE' : 'IEC', cat, sz);
     const given = (v: number | null) => (v === null ? 'not given' : v);
     return [
       ['category', `${l.guide === 'IEEE' ? 'IEEE C57.91' : 'IEC 60076-7'} ${l.name} (${l.size})`],
@@ -91,7 +91,7 @@ export const CYCLICMAX = each({
   args: checkArgs,
   result: { type: 'number', unit: 'factor on the profile' },
   compute: (...[l, a, h, cat, sz, c, top, gradient, ratio, m]: Check) =>
-    cyclicMax(modelOf(c, m, { topOilRise: top, hotSpotGradient: gradient, lossRatio: ratio }), l, a, h, parseCategory(cat), parseSize(sz)).factor,
+    cyclicMax(modelOf(c, m, { topOilRise: top, hotSpotGradient: gradient, lossRatio: ratio }), l, a, h, cat, sz).factor,
 });
 
 export const AMBIENTW = each({

@@ -1,5 +1,5 @@
 import { nextStandardRating } from '../../core/sizing';
-import { each, num, text } from '../declaration';
+import { choice, each, num } from '../declaration';
 
 export const SIZE = each({
   name: 'SIZE',
@@ -9,7 +9,7 @@ export const SIZE = each({
   args: [
     num('load_kva', 'kVA', 'Load to carry, in kVA (kW / power factor).', 640),
     num('margin', 'fraction', 'Spare capacity to add, e.g. 20%; below 100 %.', 0.2, { default: 0 }),
-    text('series', 'Rating series: "US1", "US3" or "IEC".', 'US3', { default: 'US3' }),
+    choice('series', 'Rating series: "US1", "US3" or "IEC".', { options: ['US1', 'US3', 'IEC'], default: 'US3' }),
   ],
   result: { type: 'number', unit: 'kVA' },
   compute: nextStandardRating,

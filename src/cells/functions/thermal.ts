@@ -6,13 +6,12 @@ import {
   lifeUsedHours,
   maxSteadyLoad,
   overloadTime,
-  parsePaper,
-  parseThermalMethod,
   relativeAgingRate,
   steadyHotSpot,
   steadyTopOil,
   topOilProfile,
 } from '../../core/thermal';
+import { cooling as sharedCooling, load as sharedLoad, paper as sharedPaper, thermalMethod, withSample } from '../arguments';
 import { block, each, num } from '../declaration';
 import {
   ambient,
@@ -34,13 +33,14 @@ import {
   topOilRise,
   type CoolingArg,
 } from './thermalArguments';
+import type { Paper, ThermalMethod } from '../../core/thermal';
 
 const hotspot = num('hotspot_c', '°C', 'Winding hot-spot temperature, -60 to 250 °C.', 120);
-const load = num('load', 'per unit', 'Load as a fraction of nameplate kVA; 1 = full load.', 1);
+const load = withSample(sharedLoad, 1);
 const loadBefore = num('load_before', 'per unit', 'Load the unit has carried long enough to settle, before the step (kVA ÷ nameplate kVA).', 0.6);
 const loadAfter = num('load_after', 'per unit', 'Load from the step on.', 1.3);
 
-type Model = [cooling: CoolingArg, topOilRise?: number, hsGradient?: number, lossRatio?: number, method?: string];
+type Model = [cooling: CoolingArg, topOilRise: number | undefined, hsGradient: number | undefined, lossRatio: number | undefined, method: ThermalMethod | undefined];
 const model = (...[c, top, gradient, ratio, m]: Model) => modelOf(c, m, { topOilRise: top, hotSpotGradient: gradient, lossRatio: ratio });
 
 export const HOTSPOT = each({
@@ -60,12 +60,20 @@ export const TOPOIL = each({
   source: SOURCE,
   args: [load, ambient, cooling, topOilRise, lossRatio, method],
   result: { type: 'number', unit: '°C' },
-  compute: (k: number, a: number, c: CoolingArg, top?: number, ratio?: number, m?: string) => steadyTopOil(modelOf(c, m, { topOilRise: top, lossRatio: ratio }), k, a),
+  compute: (k: number, a: number, c: CoolingArg, top: number | undefined, ratio: number | undefined, m: ThermalMethod | undefined) => steadyTopOil(modelOf(c, m, { topOilRise: top, lossRatio: ratio }), k, a),
 });
 
-const stepModel = (c: CoolingArg, top?: number, gradient?: number, ratio?: number, tauO?: number, tauW?: number, m?: string) =>
+const stepModel = (
+  c: CoolingArg,
+  top: number | undefined,
+  gradient: number | undefined,
+  ratio: number | undefined,
+  tauO: number | undefined,
+  tauW: number | undefined,
+  m: ThermalMethod | undefined,
+) =>
   modelOf(c, m, { topOilRise: top, hotSpotGradient: gradient, lossRatio: ratio, oilTimeConstant: tauO, windingTimeConstant: tauW });
-const stepArgs = [cooling, topOilRise, hsGradient, lossRatio, tauOil, tauWinding, method];
+const stepArgs = [cooling, topOilRise, hsGradient, lossRatio, tauOil, tauWinding, method] as const;
 type StepModel = Parameters<typeof stepModel>;
 
 export const HOTSPOTSTEP = each({
@@ -109,9 +117,9 @@ export const AGERATE = each({
   group: GROUP,
   help: 'Relative aging rate of the insulation paper: for "upgraded" paper the aging acceleration factor (1 at 110 °C); for "normal" kraft paper 2^((hotspot_c − 98)/6) (1 at 98 °C, doubling every 6 K).',
   source: 'IEC 60076-7 relative aging rate; IEEE C57.91 clause 5 (from memory)',
-  args: [hotspot, { ...paper, help: '"upgraded" (thermally upgraded paper, rate 1 at 110 °C, the default) or "normal" (kraft paper, rate 1 at 98 °C).', optional: true, default: 'upgraded' }],
+  args: [hotspot, sharedPaper],
   result: { type: 'number', unit: 'per unit of normal aging' },
-  compute: (hotSpotC: number, paperText: string) => relativeAgingRate(hotSpotC, parsePaper(paperText)),
+  compute: relativeAgingRate,
 });
 
 type Profile = [loads: Float64Array, ambients: Float64Array, hours: number, ...model: Model];
@@ -138,7 +146,7 @@ export const TOPOILS = block({
 
 const agingCompute =
   (f: typeof equivalentAging) =>
-  (...[l, a, h, c, top, gradient, ratio, m, p]: [...Profile, paper?: string]) => {
+  (...[l, a, h, c, top, gradient, ratio, m, p]: [...Profile, paper: Paper | undefined]) => {
     const unit = model(c, top, gradient, ratio, m);
     return f(unit, l, a, h, paperOf(unit, p));
   };
@@ -185,8 +193,8 @@ export const HEATRUN = block({
   help: "Spills a unit's thermal data as a labelled block of 14 rows — method, cooling, rated rises, loss ratio, time constants, exponents, k11 k21 k22, paper and normal life — with the table row's value wherever an argument is blank. Type a unit's heat-run report once here; give the block in place of the cooling name to every other thermal function.",
   source: `${SOURCE}; the unit's own data where given`,
   args: [
-    { ...cooling, help: 'Cooling mode: "ONAN", "ONAF", "OFAF" (or "OF"), "ODAF" (or "OD").' },
-    { ...method, help: '"IEEE" (default), "IEC" or "IEC-POWER": which guide\'s table row and equations.', default: 'IEEE' },
+    sharedCooling,
+    thermalMethod,
     topOilRise,
     hsGradient,
     opt('hs_factor', 'ratio', 'IEC hot-spot factor H from the heat-run report; when given, hs_gradient is read as the average winding gradient gr and the hot-spot gradient is H·gr.', 1.1),
@@ -202,23 +210,7 @@ export const HEATRUN = block({
     opt('normal_life_h', 'h', "Normal insulation life at the paper's reference hot-spot; blank: 180,000 h.", 180_000),
   ],
   result: { type: 'text', unit: 'label and value', columns: ['quantity', 'value'] },
-  compute: (
-    c: string,
-    m: string,
-    top?: number,
-    gradient?: number,
-    factor?: number,
-    ratio?: number,
-    tauO?: number,
-    tauW?: number,
-    n?: number,
-    mm?: number,
-    k11?: number,
-    k21?: number,
-    k22?: number,
-    p?: string,
-    life?: number,
-  ) => {
+  compute: (c, m, top, gradient, factor, ratio, tauO, tauW, n, mm, k11, k21, k22, p, life) => {
     const unit = modelOf(c, m, {
       topOilRise: top,
       hotSpotGradient: gradient,
@@ -231,9 +223,9 @@ export const HEATRUN = block({
       k11,
       k21,
       k22,
-      paper: p === undefined ? undefined : parsePaper(p),
+      paper: p,
       normalLifeHours: life,
     });
-    return heatRunBlock(parseThermalMethod(m), unit);
+    return heatRunBlock(m, unit);
   },
 });

@@ -9,7 +9,16 @@
  * ECFRf791a7b3e315557-Energy-Conservation-Standards/section-431.196.md (commit 0b97486).
  */
 import { describe, expect, it } from 'vitest';
-import { DOE_TABLES, doeMinimumEfficiency, findDoeTable, type BilBand, type DoeKind, type DoeLevels } from '../../src/core/efficiencyRules';
+import {
+  DOE_TABLES,
+  doeMinimumEfficiency,
+  EU_TIER2_LIQUID,
+  euMaximumLoss,
+  findDoeTable,
+  type BilBand,
+  type DoeKind,
+  type DoeLevels,
+} from '../../src/core/efficiencyRules';
 
 /** "kVA % kVA %" lines; "-" where a column is blank. */
 function twoColumns(text: string): { one: [number, number][]; three: [number, number][] } {
@@ -203,5 +212,30 @@ describe('ratings between rows, as the regulation directs', () => {
     expect(findDoeTable('liquid', 3, 2016).testLoad).toBe(0.5);
     expect(findDoeTable('mvdry', 3, 2016, '46-95 kV').testLoad).toBe(0.5);
     expect(findDoeTable('lvdry', 3, 2029).testLoad).toBe(0.35);
+  });
+});
+
+// EU Tier 2 maximum losses, from memory (docs/references.md, Regulations): the table is held to
+// the recalled values and to the structure of its levels (A0 − 10 %), which is no substitute for
+// the Official Journal text.
+describe('EU Tier 2, Table I.1 (from memory)', () => {
+  it('matches the four rows REFERENCES.md recalls: 400 kVA 3250/387 W, 630 kVA 4600/540 W, 1000 kVA 7600/693 W, 2500 kVA 18500/1575 W', () => {
+    for (const [kva, pk, p0] of [
+      [400, 3250, 387],
+      [630, 4600, 540],
+      [1000, 7600, 693],
+      [2500, 18500, 1575],
+    ] as const) {
+      expect(euMaximumLoss(kva, 'pk')).toBe(pk);
+      expect(euMaximumLoss(kva, 'p0')).toBe(p0);
+    }
+  });
+  it('each no-load limit is the A0 level less 10 %, rounded to the watt (A0 from memory)', () => {
+    // A0 no-load levels (EN 50588-1 / Table I.1 Tier 1 column, from memory).
+    const a0: Record<number, number> = {
+      25: 70, 50: 90, 100: 145, 160: 210, 250: 300, 315: 360, 400: 430, 500: 510, 630: 600, 800: 650, 1000: 770,
+      1250: 950, 1600: 1200, 2000: 1450, 2500: 1750, 3150: 2200,
+    };
+    for (const r of EU_TIER2_LIQUID) expect(Math.abs(r.p0W - a0[r.kva]! * 0.9)).toBeLessThanOrEqual(0.5);
   });
 });
