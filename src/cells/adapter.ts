@@ -217,20 +217,21 @@ function coerceSeries(arg: ArgDecl, raw: unknown, isError: IsError): Float64Arra
 }
 
 /**
- * A range of more than one cell for an argument with a range reader: read whole, once a call. A
- * host error value inside it is the whole result; the reader's refusal names the argument.
+ * A block of the shape an argument's range reader takes: read whole, once a call. A host error
+ * value inside it is the whole result; the reader's refusal names the argument.
  */
 function coerceRange(arg: ArgDecl, m: unknown[][], isError: IsError): ArgValue {
   for (const row of m) for (const v of row) if (isError(v)) throw new WholeResultFault(hostError(v));
   try {
-    return arg.range!(m);
+    return arg.range!.read(m);
   } catch (error) {
     if (error instanceof InputError) throw new WholeResultFault({ kind: 'refused', message: error.message });
     throw error;
   }
 }
 
-const isRange = (m: unknown[][]): boolean => m.length !== 1 || m[0]!.length !== 1;
+/** True when an argument reads this matrix whole: it has a range reader of exactly this shape. */
+const readWhole = (arg: ArgDecl, m: unknown[][]): boolean => arg.range !== undefined && m.length === arg.range.rows && m[0]!.length === arg.range.cols;
 
 // ---------------------------------------------------------------------------------------------
 // Step 3: evaluate — compute's refusals and results as cells
@@ -302,7 +303,7 @@ function prepare(decls: readonly ArgDecl[], readers: readonly CellReader[], raw:
       continue;
     }
     const m = asMatrix(d.name, raw[k]);
-    if (d.range !== undefined && isRange(m)) {
+    if (readWhole(d, m)) {
       buf[k] = coerceRange(d, m, isError);
       continue;
     }
@@ -376,7 +377,7 @@ function runBlock(
       return;
     }
     const m = asMatrix(d.name, raw[k]);
-    if (d.range !== undefined && isRange(m)) {
+    if (readWhole(d, m)) {
       values[k] = coerceRange(d, m, isError);
       return;
     }

@@ -20,10 +20,15 @@ export interface RangeValue {
 export type ArgValue = number | string | boolean | Float64Array | RangeValue | undefined;
 
 /**
- * Reads a whole range given to a single-value argument (see `orRange`). It throws InputError
- * naming the argument when the range is not one it reads.
+ * A block of cells of one fixed shape that a single-value argument also takes whole (see
+ * `orRange`): `read` turns it into the value compute receives, or throws InputError naming the
+ * argument.
  */
-export type RangeReader = (cells: readonly (readonly unknown[])[]) => RangeValue;
+export interface RangeReader {
+  readonly rows: number;
+  readonly cols: number;
+  readonly read: (cells: readonly (readonly unknown[])[]) => RangeValue;
+}
 
 /** The options of a `choice` argument: the spellings compute receives, and other accepted spellings. */
 export interface Choices {
@@ -167,13 +172,17 @@ export function choice<const T extends string>(
 }
 
 /**
- * The same argument, also taking a whole range of more than one cell that `read` turns into one
- * value for every element: such a range is read whole, never broadcast. A single cell is read as
- * the argument always reads it. The heat-run block a unit's thermal data spills, given in place
- * of the cooling name, is read this way.
+ * The same argument, also taking a block of exactly `rows` × `cols` cells, which `read` turns into
+ * one value for every element: a range of that shape is read whole, never broadcast; any other
+ * shape, and a single cell, is read as the argument always reads it. The heat-run block a unit's
+ * thermal data spills, given in place of the cooling name, is read this way.
  */
-export function orRange<V extends ArgValue, R extends RangeValue>(arg: Arg<V>, read: (cells: readonly (readonly unknown[])[]) => R): Arg<V | R> {
-  return { ...arg, range: read };
+export function orRange<V extends ArgValue, R extends RangeValue>(
+  arg: Arg<V>,
+  shape: { readonly rows: number; readonly cols: number },
+  read: (cells: readonly (readonly unknown[])[]) => R,
+): Arg<V | R> {
+  return { ...arg, range: { rows: shape.rows, cols: shape.cols, read } };
 }
 
 /** A series of numbers taken whole; a blank optional series becomes the one-value series [default]. */

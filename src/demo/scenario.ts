@@ -63,6 +63,9 @@ export const HOURS = 8760;
 /** The cooling the year's thermal formulas name: a pad-mounted unit, oil natural, air natural. */
 export const YEAR_COOLING: Cooling = 'ONAN';
 
+/** The year unit's heat-run report (invented): rated top-oil rise and hot-spot gradient, K. */
+export const YEAR_HEAT_RUN = { topOilRise: 52, hotSpotGradient: 24 } as const;
+
 /** What a turns-ratio test set would show: three decimals. */
 export function measuredRatio(u: FleetUnit): number {
   return Math.round(turnsRatio(u.hvV, u.lvV, u.vectorGroup) * (1 + u.ratioOffset) * 1000) / 1000;

@@ -149,7 +149,7 @@ describe('every declaration', () => {
 
 describe('an argument that also takes a whole range (orRange)', () => {
   // A made-up declaration: a scale given as a number, or as a 2×1 block [label, factor] read whole.
-  const scale = orRange(num('scale', 'ratio', 'A factor, or a block holding one.', 2), (cells) => {
+  const scale = orRange(num('scale', 'ratio', 'A factor, or a block holding one.', 2), { rows: 1, cols: 2 }, (cells) => {
     if (cells.length !== 1 || cells[0]!.length !== 2 || cells[0]![0] !== 'factor' || typeof cells[0]![1] !== 'number') {
       throw new InputError('scale', 'is not a factor block');
     }
@@ -166,10 +166,11 @@ describe('an argument that also takes a whole range (orRange)', () => {
   });
   const times = adapt(decl, plainErrors);
 
-  it('reads a single cell as the argument always does, and a range whole, once, for every element', () => {
+  it('reads a single cell as the argument always does, a block of its shape whole, once, for every element, and broadcasts other ranges', () => {
     expect(times(3, 2)).toEqual([[6]]);
     expect(times(3, [['factor', 5]])).toEqual([[15]]);
     expect(times([[1], [2]], [['factor', 5]])).toEqual([[5], [10]]);
+    expect(times(3, [[2], [4]])).toEqual([[6], [12]]);
   });
 
   it("turns the reader's refusal into a whole-result #VALUE! naming the argument, and passes a host error through", () => {

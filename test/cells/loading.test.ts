@@ -289,7 +289,10 @@ describe('heat-run block in place of the cooling name', () => {
   });
 
   it('refuses a range that is not a heat-run block, naming cooling and the row', () => {
-    expect(errorOf(hotspot(1, 30, [['ONAN', 1], ['x', 2]])).message).toMatch(/^argument cooling: a 2×2 range is not a heat-run block/);
+    // A range of another shape is broadcast as cooling names, as for any text argument.
+    const broadcast = hotspot(1, 30, [['ONAN'], ['x']]);
+    expect(broadcast[0]![0]).toBe(110);
+    expect(errorOf([broadcast[1]!]).message).toMatch(/^argument cooling: "x" is not one of/);
     const relabelled = unit.map((r, i) => (i === 3 ? ['gradient', r[1]] : r));
     expect(errorOf(hotspot(1, 30, relabelled)).message).toMatch(/^argument cooling: row 4 \("hot-spot gradient \(K\)"\) is labelled "gradient"/);
     const bad = unit.map((r, i) => (i === 7 ? [r[0], 9] : r));

@@ -20,15 +20,18 @@ import {
   OFFER_COLUMNS,
   OFFER_ROW,
   OFFERS,
+  hottestDay,
   PROFILE_COLUMNS,
+  YEAR_BLOCKS,
   YEAR_CELLS,
+  YEAR_THERMAL_DATA,
   YEAR_UNIT,
   yearOfAmbients,
   yearOfLoads,
 } from '../../src/demo';
 import { loadLossWorth, noLoadLossWorth, totalOwningCost } from '../../src/core/cost';
 import { doeMinimumEfficiency, meetsEfficiencyRule } from '../../src/core/efficiencyRules';
-import { IEEE_ROWS, loadingYear, maxSteadyLoad } from '../../src/core/thermal';
+import { cyclicMax, hotSpotAfterStep, loadingYear, maxSteadyLoad, overloadTime, profileCheck, steadyHotSpot, thermalModel } from '../../src/core/thermal';
 import { loadWorkbook, recalculate, type FormulaResult } from '../../src/engine/xlsx';
 import { xfmr } from '../support/cells';
 import { fluxbook } from './run';
@@ -117,7 +120,9 @@ describe('the Fernhill Works demo', () => {
   it('the year’s hot-spot, aging and life used are those of the thermal core on the same loads and ambients', async () => {
     const loads = yearOfLoads();
     const ambients = yearOfAmbients();
-    const core = loadingYear(loads, ambients, { cooling: 'ONAN' });
+    // FH-03's own thermal data: its heat-run report's rises and R = Pk/P0 = 16,900 / 2,160.
+    expect(YEAR_THERMAL_DATA.lossRatio).toBeCloseTo(7.824, 3);
+    const core = loadingYear(loads, ambients, { cooling: 'ONAN', data: YEAR_THERMAL_DATA });
     expect(summary.year.peakHotSpotC).toBeCloseTo(core.peakHotSpot, 10);
     expect(summary.year.equivalentAging).toBeCloseTo(core.equivalentAging, 14);
     expect(summary.year.lifeUsedHours).toBeCloseTo(core.lifeUsedHours, 9);
@@ -132,7 +137,7 @@ describe('the Fernhill Works demo', () => {
     const profile = wb.getWorksheet('Profile')!;
     const p = PROFILE_COLUMNS;
     const anchor = profile.getCell(`${p.hotSpot}2`).value as { formula: string; ref: string; shareType: string };
-    expect(anchor.formula).toBe(`_xldudf_XFMR_HOTSPOTS(B2:B${HOURS + 1},C2:C${HOURS + 1},1,"ONAN")`);
+    expect(anchor.formula).toBe(`_xldudf_XFMR_HOTSPOTS(B2:B${HOURS + 1},C2:C${HOURS + 1},1,Summary!$D$2:$E$15)`);
     expect(anchor).toMatchObject({ shareType: 'array', ref: `${p.hotSpot}2:${p.hotSpot}${HOURS + 1}` });
     for (const h of [0, 1, 4000, HOURS - 1]) expect(profile.getCell(`${p.hotSpot}${h + 2}`).result ?? profile.getCell(`${p.hotSpot}${h + 2}`).value).toBeCloseTo(core.hotSpots[h]!, 10);
     expect(profile.getCell(`${p.hotSpot}${HOURS + 2}`).value).toBeNull();
@@ -141,7 +146,47 @@ describe('the Fernhill Works demo', () => {
     const at = (cell: string) => results.find((r) => r.sheet === 'Summary' && r.cell === cell)!.value as number;
     const hottest = Math.max(...ambients);
     expect(at(YEAR_CELLS.hottestAmbient)).toBe(hottest);
-    expect(at(YEAR_CELLS.maxLoadHottest)).toBeCloseTo(maxSteadyLoad(IEEE_ROWS.ONAN, hottest, 110), 12);
+    const unit = thermalModel('IEEE', 'ONAN', YEAR_THERMAL_DATA);
+    expect(at(YEAR_CELLS.maxLoadHottest)).toBeCloseTo(maxSteadyLoad(unit, hottest, 110), 12);
+  });
+
+  it('the year sheet answers "can FH-03 carry its load?" with the loading core on its own thermal data', async () => {
+    const loads = yearOfLoads();
+    const ambients = yearOfAmbients();
+    const unit = thermalModel('IEEE', 'ONAN', YEAR_THERMAL_DATA);
+    const results = recalculate(await loadWorkbook(readFileSync(summary.files[1]!)));
+    const at = (cell: string) => results.find((r) => r.sheet === 'Summary' && r.cell === cell)!.value;
+    const check = profileCheck(unit, loads, ambients, 1, 'normal', 'distribution');
+    expect(at(YEAR_CELLS.loadOk)).toBe(check.withinLimits);
+    expect(at(YEAR_CELLS.loadOk)).toBe(true);
+    const factor = cyclicMax(unit, loads, ambients, 1, 'normal', 'distribution').factor;
+    expect(at(YEAR_CELLS.cyclicMax) as number).toBeCloseTo(factor, 12);
+    expect(factor).toBeGreaterThan(1);
+    // After the peak of its hottest day, at that day's hottest ambient, 1.3 per unit until 120 °C:
+    const day = hottestDay(loads, ambients);
+    const dayLoads = loads.subarray(day * 24, day * 24 + 24);
+    const peak = Math.max(...dayLoads);
+    const ambient = Math.max(...ambients.subarray(day * 24, day * 24 + 24));
+    expect(at(YEAR_CELLS.hottestDayPeak)).toBe(peak);
+    const hours = overloadTime(unit, peak, 1.3, ambient, 120).hours;
+    expect(at(YEAR_CELLS.overload120) as number).toBeCloseTo(hours, 9);
+    expect(hotSpotAfterStep(unit, peak, 1.3, hours, ambient)).toBeCloseTo(120, 6);
+    expect(at(YEAR_CELLS.settlesAt13) as number).toBeCloseTo(steadyHotSpot(unit, 1.3, ambient), 12);
+
+    // The two spills: the heat-run block every thermal formula reads, and the LOADCHECK report.
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.readFile(summary.files[1]!);
+    const sheet = wb.getWorksheet('Summary')!;
+    const cell = (a: string) => {
+      const c = sheet.getCell(a);
+      return c.result ?? c.value;
+    };
+    expect(cell('D6')).toBe('loss ratio R');
+    expect(cell('E6') as number).toBeCloseTo(YEAR_THERMAL_DATA.lossRatio, 12);
+    expect(cell(YEAR_BLOCKS.check)).toBe('category');
+    expect(cell('E21') as number).toBeCloseTo(check.peakHotSpot, 9);
+    expect(cell('D28')).toBe('first limit exceeded');
+    expect(cell('E28')).toBe('none');
   });
 
   it('the bid sheet: each TOC is the cost core’s, the offer below the DOE 2016 minimum is flagged, the lowest compliant TOC wins', async () => {

@@ -42,7 +42,7 @@ function blankable<T extends string>(arg: Arg<T>, help: string): Arg<T | undefin
 }
 
 /** The cooling mode, or the block XFMR.HEATRUN spills in its place (read by readHeatRun). */
-export const cooling = orRange(sharedCooling, (cells) => readHeatRun(cells));
+export const cooling = orRange(sharedCooling, { rows: 14, cols: 2 }, (cells) => readHeatRun(cells));
 export const method = blankable(
   thermalMethod,
   '"IEEE" (C57.91 clause 7, the default), "IEC" (60076-7; ONAN takes the distribution-transformer row, the other coolings the power-transformer rows) or "IEC-POWER" (60076-7 power-transformer rows for every cooling, ONAN included). Blank with a heat-run block: the block\'s method.',
