@@ -10,7 +10,7 @@
  *
  * Sources and their status (docs/references.md, Loading and aging):
  *  - IEC rows: IEC 60076-7 Table 4, recommended thermal characteristics for the exponential
- *    equations, from memory (the search tool held no copy of the table). The rows are internally
+ *    equations, from memory. The rows are internally
  *    consistent: each reaches 98 °C hot-spot at rated load and 20 °C ambient (20 + Δθor + Hgr),
  *    which the tests check.
  *  - IEEE rows: exponents n and m from the IEEE C57.91 table of exponents for the temperature
