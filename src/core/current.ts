@@ -14,24 +14,39 @@ export function ratedCurrent(kva: number, volts: number, phases: number): number
   return phaseCount('phases', phases) === 3 ? s / (SQRT3 * v) : s / v;
 }
 
+export type WindingSide = 'HV' | 'LV';
+
 /**
  * Current in one phase winding. A delta winding carries line current / √3; star and zigzag
  * windings carry the line current (common practice). `connection` is the letter of the winding
- * — D, Y, YN, Z, ZN in either case — or a whole vector group, whose HV letter is then used.
+ * the voltage belongs to — D, Y, YN, Z, ZN in either case — or a whole vector group together
+ * with the side ("HV" or "LV") the voltage belongs to. A vector group without a side names two
+ * windings of different connection, so it is refused rather than read as either one.
  */
-export function windingCurrent(kva: number, volts: number, connection: string, phases: number): number {
+export function windingCurrent(kva: number, volts: number, connection: string, phases: number, side?: WindingSide): number {
   const line = ratedCurrent(kva, volts, phases);
   if (phases === 1) return line;
-  return connectionOf(connection) === 'D' ? line / SQRT3 : line;
+  return connectionOf(connection, side) === 'D' ? line / SQRT3 : line;
 }
 
-function connectionOf(text: string): 'D' | 'Y' | 'Z' {
+function connectionOf(text: string, side: WindingSide | undefined): 'D' | 'Y' | 'Z' {
   const t = String(text).trim().toUpperCase();
+  if (/\d$/.test(t)) {
+    const group = parseVectorGroup('vector_letter', text);
+    if (side === undefined) {
+      const hv = group.text.match(/^[A-Z]+/)![0];
+      const lv = group.text.slice(hv.length).replace(/\d+$/, '');
+      throw new InputError(
+        'vector_letter',
+        `"${String(text).trim()}" names both windings; type the letter of the winding v belongs to ("${hv}" for the HV side, "${lv}" for the LV side), or give side "HV" or "LV"`,
+      );
+    }
+    return side === 'HV' ? group.hv : group.lv;
+  }
   if (t === 'D') return 'D';
   if (t === 'Y' || t === 'YN') return 'Y';
   if (t === 'Z' || t === 'ZN') return 'Z';
-  if (/\d$/.test(t)) return parseVectorGroup('vector_letter', text).hv;
-  throw new InputError('vector_letter', `"${text}" is not a winding connection; use D, Y, YN, Z or ZN`);
+  throw new InputError('vector_letter', `"${text}" is not a winding connection; use D, Y, YN, Z or ZN, or a vector group such as Dyn11 with side "HV" or "LV"`);
 }
 
 export function apparentPowerKva(amps: number, volts: number, phases: number): number {

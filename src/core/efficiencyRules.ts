@@ -5,6 +5,7 @@
  * Regulation (EU) 2019/1783). Tables are typed once from the regulation text, each with the
  * paragraph it comes from; the reference tests re-read every row against the printed tables.
  */
+import { efficiencyAt } from './efficiency';
 import { InputError, NotInTableError, shown } from './errors';
 import { nonNegative, oneOf, phaseCount, positive } from './guards';
 
@@ -214,12 +215,55 @@ export function doeTableFor(kindText: string, phases: number, levels: number, bi
   return findDoeTable(kind, p, l, kind === 'mvdry' ? bilBand(bilKv) : undefined);
 }
 
+/**
+ * The voltages of a distribution transformer as 10 CFR 431.192 defines it: input 34.5 kV or
+ * less, output 600 V or less; a low-voltage dry-type unit has an input of 600 V or less (read in
+ * the definitions as printed at laws9.com/cfr/text/10/431/192 and 42 U.S.C. 6291(35)). A unit
+ * outside them is not covered by any table: NotInTableError. A blank voltage is not checked.
+ */
+export const DOE_MAX_INPUT_V = 34500;
+export const DOE_MAX_OUTPUT_V = 600;
+const DOE_LV_DRY_MAX_INPUT_V = 600;
+
+export function checkDoeScope(kind: DoeKind, hvVolts: number | undefined, lvVolts: number | undefined): void {
+  if (hvVolts !== undefined) {
+    const hv = positive('hv_v', hvVolts);
+    if (hv > DOE_MAX_INPUT_V) {
+      throw new NotInTableError('hv_v', `${shown(hv)} V is above 34,500 V: 10 CFR 431.192 covers distribution transformers with an input of 34.5 kV or less, so no DOE level applies`);
+    }
+    if (kind === 'lvdry' && hv > DOE_LV_DRY_MAX_INPUT_V) {
+      throw new InputError('kind', `"lvdry" is a dry-type unit with an input of 600 V or less, but hv_v is ${shown(hv)} V; use "mvdry"`);
+    }
+    if (kind === 'mvdry' && hv <= DOE_LV_DRY_MAX_INPUT_V) {
+      throw new InputError('kind', `"mvdry" is a dry-type unit with an input above 600 V, but hv_v is ${shown(hv)} V; use "lvdry"`);
+    }
+  }
+  if (lvVolts !== undefined) {
+    const lv = positive('lv_v', lvVolts);
+    if (lv > DOE_MAX_OUTPUT_V) {
+      throw new NotInTableError('lv_v', `${shown(lv)} V is above 600 V: 10 CFR 431.192 covers distribution transformers with an output of 600 V or less, so no DOE level applies`);
+    }
+  }
+}
+
 /** Minimum efficiency (fraction) at the regulation's test load and power factor 1. */
-export function doeMinimumEfficiency(kva: number, kindText: string, phases: number, levels: number, bilKv: number | undefined): number {
+export function doeMinimumEfficiency(
+  kva: number,
+  kindText: string,
+  phases: number,
+  levels: number,
+  bilKv: number | undefined,
+  hvVolts?: number,
+  lvVolts?: number,
+): number {
   const s = positive('kva', kva);
-  const t = doeTableFor(kindText, phases, levels, bilKv);
+  checkDoeScope(parseDoeKind(kindText), hvVolts, lvVolts);
+  return doeMinimumOf(doeTableFor(kindText, phases, levels, bilKv), s);
+}
+
+function doeMinimumOf(t: DoeTable, kva: number): number {
   const rows = t.rows.map((r) => ({ kva: r.kva, value: r.percent }));
-  return interpolate(rows, s, describeDoe(t)) / 100;
+  return interpolate(rows, kva, describeDoe(t)) / 100;
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -282,14 +326,37 @@ export function parseEuLoss(text: string): EuLoss {
   return oneOf('which', t, ['pk', 'p0'] as const);
 }
 
+/** Table I.1 covers one winding with Um ≤ 24 kV and the other with Um ≤ 1.1 kV. */
+export const EU_TABLE_MAX_HV_UM_KV = 24;
+export const EU_TABLE_MAX_LV_UM_KV = 1.1;
+
+/**
+ * A unit outside Table I.1 has no row here: windings of a higher Um (the regulation allows higher
+ * losses for them by other rules of Annex I) and pole-mounted units (their own table in Annex I).
+ * Neither is held by Fluxbook, so both are NotInTableError. A blank voltage is taken as within the
+ * table's range, as the help says.
+ */
+export function checkEuScope(hvUmKv: number | undefined, lvUmKv: number | undefined, poleMounted: boolean): void {
+  if (poleMounted) {
+    throw new NotInTableError('pole_mounted', 'pole-mounted units have their own maximum losses in Annex I of EU 548/2014, which Fluxbook does not hold; Table I.1 is for ground-mounted units');
+  }
+  if (hvUmKv !== undefined && positive('hv_um_kv', hvUmKv) > EU_TABLE_MAX_HV_UM_KV) {
+    throw new NotInTableError('hv_um_kv', `Um ${shown(hvUmKv)} kV is above 24 kV: Table I.1 covers windings up to Um 24 kV; higher-voltage units have other limits in Annex I, not held here`);
+  }
+  if (lvUmKv !== undefined && positive('lv_um_kv', lvUmKv) > EU_TABLE_MAX_LV_UM_KV) {
+    throw new NotInTableError('lv_um_kv', `Um ${shown(lvUmKv)} kV is above 1.1 kV: Table I.1 covers a second winding up to Um 1.1 kV; other units have other limits in Annex I, not held here`);
+  }
+}
+
 /**
  * Maximum Tier 2 loss in W for a rating. The "≤ 25" row holds from 5 to 25 kVA; between rows the
  * limit is interpolated linearly, as Annex I directs for intermediate ratings (from memory).
  * Above 3150 kVA the regulation sets a minimum peak efficiency index instead: no row.
  */
-export function euMaximumLoss(kva: number, whichText: string): number {
+export function euMaximumLoss(kva: number, whichText: string, hvUmKv?: number, lvUmKv?: number, poleMounted = false): number {
   const s = positive('kva', kva);
   const which = parseEuLoss(whichText);
+  checkEuScope(hvUmKv, lvUmKv, poleMounted);
   if (s < EU_MEDIUM_POWER_MIN_KVA) {
     throw new NotInTableError('kva', `${shown(s)} kVA is below 5 kVA, the smallest medium power transformer of EU 548/2014`);
   }
@@ -307,17 +374,16 @@ export function euMaximumLoss(kva: number, whichText: string): number {
 
 export type Rule = 'DOE' | 'EU' | 'both';
 
-/** Efficiency at a per-unit load and power factor 1 from the losses: x·S / (x·S + P0 + x²·Pk). */
-function efficiencyAtTestLoad(kva: number, p0: number, pk: number, x: number): number {
-  const out = x * kva * 1000;
-  return out / (out + p0 + x * x * pk);
-}
-
 /**
  * TRUE when the losses meet the rule. DOE: the efficiency at the table's test load (50 %, or 35 %
  * for low-voltage dry-type), power factor 1, is at least the minimum, compared unrounded. EU: both
- * P0 and Pk are at most the Tier 2 maxima (three-phase liquid-immersed only). "both": the two.
- * The losses must be at the reference temperature each rule's test method uses.
+ * P0 and Pk are at most the Tier 2 maxima (three-phase liquid-immersed only).
+ *
+ * Each rule judges losses measured its own way: the DOE test procedure (10 CFR 431 subpart K,
+ * appendix A) at 60 Hz with the load loss at 55 °C for liquid-immersed units, the EU rule at
+ * 50 Hz with the load loss at 75 °C (IEC 60076-1). One pair of losses cannot be right for both,
+ * so "both" takes the DOE losses in p0_w, pk_w and the EU losses in p0_eu_w, pk_eu_w, and refuses
+ * when the EU pair is blank.
  */
 export function meetsEfficiencyRule(
   kva: number,
@@ -328,23 +394,36 @@ export function meetsEfficiencyRule(
   phases: number,
   levels: number,
   bilKv: number | undefined,
+  p0EuWatts?: number,
+  pkEuWatts?: number,
 ): boolean {
   const s = positive('kva', kva);
   const p0 = nonNegative('p0_w', p0Watts);
   const pk = nonNegative('pk_w', pkWatts);
   const rule = oneOf('rule', ruleText, ['DOE', 'EU', 'both'] as const);
+  let euP0 = p0;
+  let euPk = pk;
+  if (rule === 'both') {
+    if (p0EuWatts === undefined || pkEuWatts === undefined) {
+      throw new InputError(
+        p0EuWatts === undefined ? 'p0_eu_w' : 'pk_eu_w',
+        'is blank; "both" needs the EU losses (50 Hz, load loss at 75 °C) in p0_eu_w and pk_eu_w as well as the DOE losses (60 Hz, load loss at 55 °C for liquid-immersed) in p0_w and pk_w',
+      );
+    }
+    euP0 = nonNegative('p0_eu_w', p0EuWatts);
+    euPk = nonNegative('pk_eu_w', pkEuWatts);
+  }
   let ok = true;
   if (rule !== 'EU') {
     const t = doeTableFor(kindText, phases, levels, bilKv);
-    const minimum = doeMinimumEfficiency(s, kindText, phases, levels, bilKv);
-    ok = ok && efficiencyAtTestLoad(s, p0, pk, t.testLoad) >= minimum;
+    ok = efficiencyAt(s, p0, pk, t.testLoad, 1) >= doeMinimumOf(t, s);
   }
   if (rule !== 'DOE') {
     const kind = parseDoeKind(kindText);
     if (kind !== 'liquid' || phaseCount('phases', phases) !== 3) {
       throw new NotInTableError('kind', 'the EU Tier 2 table in Fluxbook covers three-phase liquid-immersed units only');
     }
-    ok = ok && p0 <= euMaximumLoss(s, 'p0') && pk <= euMaximumLoss(s, 'pk');
+    ok = ok && euP0 <= euMaximumLoss(s, 'p0') && euPk <= euMaximumLoss(s, 'pk');
   }
   return ok;
 }

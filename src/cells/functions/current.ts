@@ -1,4 +1,5 @@
 import { apparentPowerKva, faultCurrent, ratedCurrent, windingCurrent } from '../../core/current';
+import { oneOf } from '../../core/guards';
 import { each, num, text } from '../declaration';
 
 const GROUP = 'Current and power';
@@ -19,16 +20,20 @@ export const IRATED = each({
 export const IWINDING = each({
   name: 'IWINDING',
   group: GROUP,
-  help: 'Current in one phase winding: line current / √3 in a delta winding, the line current in star or zigzag.',
+  help: 'Current in one phase winding: line current / √3 in a delta winding, the line current in star or zigzag. Give the letter of the winding v belongs to, or a whole vector group with side "HV" or "LV".',
   source: 'delta phase current = line current / √3 (common practice)',
   args: [
     kva,
     volts,
-    text('vector_letter', 'Connection of the winding: D, Y, YN, Z or ZN (either case).', 'D'),
+    text('vector_letter', 'Connection of the winding v belongs to: D, Y, YN, Z or ZN (either case); or a vector group such as Dyn11 together with side.', 'D'),
     phases,
+    text('side', '"HV" or "LV": the winding of the vector group that v belongs to; needed only when vector_letter is a whole vector group.', 'LV', {
+      optional: true,
+    }),
   ],
   result: { type: 'number', unit: 'A' },
-  compute: windingCurrent,
+  compute: (k: number, v: number, letter: string, p: number, side: string | undefined) =>
+    windingCurrent(k, v, letter, p, side === undefined ? undefined : oneOf('side', side, ['HV', 'LV'] as const)),
 });
 
 export const KVA = each({
