@@ -144,8 +144,9 @@ describe('regulation-rule cells', () => {
   });
   it('COMPLIES returns TRUE/FALSE with kind, phases and levels defaulted', () => {
     const f = adapt(COMPLIES, plainErrors);
-    expect(cell(f(500, 400, 3600, 'both'))).toBe(true);
-    expect(cell(f(500, 520, 3000, 'both', null, null, null, null))).toBe(false);
+    expect(cell(f(500, 400, 3600, 'both', null, null, null, null, 400, 3600))).toBe(true);
+    expect(cell(f(500, 520, 3000, 'both', null, null, null, null, 520, 3000))).toBe(false);
+    expect(errorOf(f(500, 400, 3600, 'both')).message).toMatch(/argument p0_eu_w: is blank; "both" needs the EU losses/);
     expect(errorOf(f(500, 400, 3600, null)).message).toMatch(/argument rule: is blank/);
   });
 });

@@ -5,6 +5,7 @@
 import * as formulajs from '@formulajs/formulajs';
 import { describe, expect, it } from 'vitest';
 import { loadLossWorth, noLoadLossWorth, presentWorthFactor } from '../../src/core/cost';
+import { yearsToLimit } from '../../src/core/sizing';
 
 describe('present-worth factor = −PV(rate, years, 1) of @formulajs/formulajs', () => {
   const cases: [number, number][] = [
@@ -35,5 +36,36 @@ describe('loss capitalisation worked example', () => {
   it('B: 1280 EUR per kW of load loss at a steady 45 % load (loss factor 1)', () => {
     const b = loadLossWorth(0.055, 1, 0.45, 0.065, 30, 8760);
     expect(Math.abs(b * 1000 - 1280) / 1280).toBeLessThan(0.005);
+  });
+});
+
+describe('demand charge and responsibility factor in A and B (IEEE C57.120 loss evaluation, from memory)', () => {
+  it('a demand charge alone is worth demand / 1000 × PW a watt of no-load loss', () => {
+    // Source: @formulajs/formulajs PV for the present-worth factor.
+    const pw = -(formulajs.PV(0.07, 20, 1) as number);
+    expect(noLoadLossWorth(0, 0.07, 20, 8760, 95)).toBeCloseTo((95 / 1000) * pw, 10);
+  });
+  it('the load-loss share carries the square of the unit’s load at the system peak', () => {
+    // Load loss at the system peak is Pk × (responsibility × peak)² (load loss goes with current², common practice).
+    const pw = -(formulajs.PV(0.07, 20, 1) as number);
+    expect(loadLossWorth(0, 0.3, 0.8, 0.07, 20, 8760, 95, 0.9)).toBeCloseTo((95 / 1000) * pw * 0.81 * 0.64, 10);
+  });
+  it('without a demand charge A and B are the energy terms alone', () => {
+    expect(loadLossWorth(0.1, 0.3, 0.8, 0.07, 20, 8760, 0, 0.5)).toBeCloseTo(loadLossWorth(0.1, 0.3, 0.8, 0.07, 20, 8760), 12);
+  });
+});
+
+describe('years until a growing peak reaches a limit = NPER of @formulajs/formulajs', () => {
+  it.each([
+    [820, 0.03, 1000],
+    [500, 0.05, 750],
+    [1900, 0.012, 2500],
+  ])('peak %s kVA growing %s a year to %s kVA', (peak, growth, limit) => {
+    // Source: @formulajs/formulajs NPER(rate, 0, −pv, fv): periods for −pv to grow to fv.
+    expect(yearsToLimit(peak, growth, limit)).toBeCloseTo(formulajs.NPER(growth, 0, -peak, limit) as number, 10);
+  });
+  it('0 when already at the limit; no answer when the peak does not grow', () => {
+    expect(yearsToLimit(1000, 0.03, 1000)).toBe(0);
+    expect(() => yearsToLimit(800, 0, 1000)).toThrow(/never reaches/);
   });
 });

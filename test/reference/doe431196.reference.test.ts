@@ -9,7 +9,8 @@
  * ECFRf791a7b3e315557-Energy-Conservation-Standards/section-431.196.md (commit 0b97486).
  */
 import { describe, expect, it } from 'vitest';
-import { DOE_TABLES, doeMinimumEfficiency, findDoeTable, type BilBand, type DoeKind, type DoeLevels } from '../../src/core/efficiencyRules';
+import { DOE_TABLES, doeMinimumEfficiency, findDoeTable, meetsEfficiencyRule, type BilBand, type DoeKind, type DoeLevels } from '../../src/core/efficiencyRules';
+import { NotInTableError } from '../../src/core/errors';
 
 /** "kVA % kVA %" lines; "-" where a column is blank. */
 function twoColumns(text: string): { one: [number, number][]; three: [number, number][] } {
@@ -203,5 +204,38 @@ describe('ratings between rows, as the regulation directs', () => {
     expect(findDoeTable('liquid', 3, 2016).testLoad).toBe(0.5);
     expect(findDoeTable('mvdry', 3, 2016, '46-95 kV').testLoad).toBe(0.5);
     expect(findDoeTable('lvdry', 3, 2029).testLoad).toBe(0.35);
+  });
+});
+
+describe('units outside the regulation have no minimum (10 CFR 431.192 definition)', () => {
+  // Source: 10 CFR 431.192, "Distribution transformer means a transformer that (1) has an input
+  // voltage of 34.5 kV or less; (2) has an output voltage of 600 V or less; (3) is rated for
+  // operation at a frequency of 60 Hz" (laws9.com/cfr/text/10/431/192; the same limits in
+  // 42 U.S.C. 6291(35) at law.cornell.edu).
+  it('a 69 kV primary or a 4,160 V secondary is #N/A, not a silent number', () => {
+    expect(() => doeMinimumEfficiency(1000, 'liquid', 3, 2016, undefined, 69000, 480)).toThrow(NotInTableError);
+    expect(() => doeMinimumEfficiency(1000, 'liquid', 3, 2016, undefined, 12470, 4160)).toThrow(/argument lv_v: 4160 V is above 600 V/);
+  });
+  it('34.5 kV and 600 V themselves are in scope', () => {
+    expect(doeMinimumEfficiency(1000, 'liquid', 3, 2016, undefined, 34500, 600)).toBeCloseTo(0.9943, 12);
+  });
+  it('"lvdry" with a medium-voltage primary, or "mvdry" with a 480 V one, is refused as the wrong kind', () => {
+    expect(() => doeMinimumEfficiency(75, 'lvdry', 3, 2016, undefined, 4160, 208)).toThrow(/argument kind: "lvdry"/);
+    expect(() => doeMinimumEfficiency(75, 'mvdry', 3, 2016, 95, 480, 208)).toThrow(/argument kind: "mvdry"/);
+  });
+});
+
+describe('COMPLIES "both": each rule judges its own losses', () => {
+  // Source: 10 CFR 431 subpart K appendix A (the DOE test procedure: liquid-immersed load loss at
+  // 55 °C, no-load loss at 20 °C, 60 Hz) against the IEC 60076-1 reference temperature of 75 °C
+  // the EU rule uses: one pair of losses cannot stand for both.
+  it('refuses "both" without the EU pair, naming the argument', () => {
+    expect(() => meetsEfficiencyRule(500, 400, 3600, 'both', 'liquid', 3, 2016, undefined)).toThrow(/argument p0_eu_w: is blank/);
+  });
+  it('a unit whose 75 °C load loss exceeds the EU limit fails "both" though its 55 °C one would pass', () => {
+    // 500 kVA: EU Pk max 3900 W (from memory). 3,600 W at 55 °C is some 3,850 W at 75 °C if all I²R
+    // (×309.5/289.5); a unit measuring 3,950 W at 75 °C fails the EU rule, whatever its 55 °C figure.
+    expect(meetsEfficiencyRule(500, 400, 3600, 'both', 'liquid', 3, 2016, undefined, 400, 3600)).toBe(true);
+    expect(meetsEfficiencyRule(500, 400, 3600, 'both', 'liquid', 3, 2016, undefined, 400, 3950)).toBe(false);
   });
 });
