@@ -27,7 +27,7 @@ export const LOSSES = each({
 
 // Winding temperatures at which load loss is usually stated, for the help texts.
 const REFERENCE_TEMPERATURES =
-  '85 °C for 65 °C-rise liquid-immersed units (IEEE C57.12.00), 75 °C (IEC 60076-1), 55 °C for liquid-immersed units under the US DOE test procedure (10 CFR 431 appendix A)';
+  '85 °C for 65 °C-rise liquid-immersed units (IEEE C57.12.00), 75 °C (IEC 60076-1), 55 °C for liquid-immersed and 75 °C for dry-type units under the US DOE test procedure (10 CFR 431 subpart K, appendix A)';
 
 export const LOSSTEMP = each({
   name: 'LOSSTEMP',
