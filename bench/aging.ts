@@ -1,32 +1,14 @@
 /**
  * A year of aging: the transient thermal model plus the aging sum for one unit-year (8,760 hourly
- * steps) and for 1,000 unit-years, against a bare loop of the same transcendental calls a step
- * makes (two logs and three exps for IEEE ONAN), which any implementation of these formulas pays.
+ * steps) and for 1,000 unit-years, against the bare loop of agingWorkload.ts.
  */
-import { agingRateSum, hotSpotSeriesInto, IEEE_ROWS, type ThermalCharacteristics } from '../src/core/thermal';
+import { IEEE_ROWS } from '../src/core/thermal';
+import { bareLoop, fleet, unitYear } from './agingWorkload';
 import { type BenchRow, meanMs, ms } from './harness';
 
-const STEPS = 8760;
-
 export async function agingBenchmark(): Promise<BenchRow[]> {
-  const loads = Float64Array.from({ length: STEPS }, (_, i) => 0.55 + 0.35 * Math.sin((2 * Math.PI * (i - 8)) / 24) + 0.1 * Math.sin(i / 37));
-  const ambients = Float64Array.from({ length: STEPS }, (_, i) => 12 + 10 * Math.sin((2 * Math.PI * (i - 2900)) / STEPS) + 4 * Math.sin((2 * Math.PI * i) / 24));
-  const out = new Float64Array(STEPS);
-  const fleet: ThermalCharacteristics[] = Array.from({ length: 1000 }, (_, u) => ({ ...IEEE_ROWS.ONAN, topOilRise: 50 + (u % 10), hotSpotGradient: 20 + (u % 7) }));
   let sink = 0;
-  const unitYear = (m: ThermalCharacteristics): number => {
-    hotSpotSeriesInto(m, loads, ambients, 1, out);
-    return agingRateSum(out, 'upgraded');
-  };
-  const bare = (): number => {
-    let s = 0;
-    for (let i = 0; i < STEPS; i++) {
-      const k2 = loads[i]! * loads[i]!;
-      s += Math.exp(0.8 * Math.log((1 + 5 * k2) / 6)) + Math.exp(0.8 * Math.log(k2)) + Math.exp(39.16 - 15000 / (ambients[i]! + 353));
-    }
-    return s;
-  };
-  const one = await meanMs({ model: () => void (sink += unitYear(IEEE_ROWS.ONAN)), bare: () => void (sink += bare()) });
+  const one = await meanMs({ model: () => void (sink += unitYear(IEEE_ROWS.ONAN)), bare: () => void (sink += bareLoop()) });
   const many = await meanMs({ model: () => { for (const m of fleet) sink += unitYear(m); } }, { time: 4000, warmupTime: 500 });
   if (!Number.isFinite(sink)) throw new Error('aging benchmark result is not finite');
   const ratio = one.model! / one.bare!;

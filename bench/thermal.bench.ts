@@ -9,37 +9,10 @@
 import { Bench } from 'tinybench';
 import { adapt, plainErrors } from '../src/cells/adapter';
 import { FEQA } from '../src/cells/functions/thermal';
-import { agingRateSum, hotSpotSeriesInto, IEC_DISTRIBUTION_ONAN, IEEE_ROWS, type ThermalCharacteristics } from '../src/core/thermal';
-
-const STEPS = 8760;
-const UNITS = 1000;
-const loads = Float64Array.from({ length: STEPS }, (_, i) => 0.55 + 0.35 * Math.sin((2 * Math.PI * (i - 8)) / 24) + 0.1 * Math.sin(i / 37));
-const ambients = Float64Array.from({ length: STEPS }, (_, i) => 12 + 10 * Math.sin((2 * Math.PI * (i - 2900)) / STEPS) + 4 * Math.sin((2 * Math.PI * i) / 24));
-const out = new Float64Array(STEPS);
-
-/** 1,000 units of the fleet: the same profile scaled, each with its own rated rises. */
-const fleet: ThermalCharacteristics[] = Array.from({ length: UNITS }, (_, u) => ({
-  ...IEEE_ROWS.ONAN,
-  topOilRise: 50 + (u % 10),
-  hotSpotGradient: 20 + (u % 7),
-}));
+import { IEC_DISTRIBUTION_ONAN, IEEE_ROWS } from '../src/core/thermal';
+import { ambients, bareLoop, fleet, hotSpotYear, loads, STEPS, unitYear } from './agingWorkload';
 
 let sink = 0;
-
-function unitYear(m: ThermalCharacteristics): number {
-  hotSpotSeriesInto(m, loads, ambients, 1, out);
-  return agingRateSum(out, 'upgraded');
-}
-
-/** The calls the kernel and aging sum make per step, with nothing else: two Math.log, three Math.exp. */
-function bareLoop(): number {
-  let s = 0;
-  for (let i = 0; i < STEPS; i++) {
-    const k2 = loads[i]! * loads[i]!;
-    s += Math.exp(0.8 * Math.log((1 + 5 * k2) / 6)) + Math.exp(0.8 * Math.log(k2)) + Math.exp(39.16 - 15000 / (ambients[i]! + 353));
-  }
-  return s;
-}
 
 /** The two powers a step written with Math.pow instead. */
 function powLoop(): number {
@@ -64,7 +37,7 @@ bench
     sink += powLoop();
   })
   .add('kernel: hot-spot series, IEEE ONAN, 1 unit-year', () => {
-    sink += hotSpotSeriesInto(IEEE_ROWS.ONAN, loads, ambients, 1, out)[STEPS - 1]!;
+    sink += hotSpotYear(IEEE_ROWS.ONAN);
   })
   .add('kernel + aging (F_EQA), IEEE ONAN, 1 unit-year', () => {
     sink += unitYear(IEEE_ROWS.ONAN);

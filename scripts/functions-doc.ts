@@ -5,7 +5,7 @@
  * document is written: the numbers in it are what a workbook shows, never typed by hand.
  */
 import type { RawCellContent } from 'hyperformula';
-import { catalog, NAMESPACE } from '../src/cells/catalog';
+import { catalog, formulaName, NAMESPACE } from '../src/cells/catalog';
 import type { ArgDecl, CellFunctionDecl, Scalar } from '../src/cells/declaration';
 import {
   cellName,
@@ -29,7 +29,6 @@ const TEXT_FOR_NUMBER = 'n/a';
 /** A word no text option takes, for a function without a number argument. */
 const UNKNOWN_WORD = 'none';
 
-const fullName = (d: CellFunctionDecl): string => `${NAMESPACE}.${d.name}`;
 
 /** GitHub's heading anchors: lower case, punctuation dropped, spaces to hyphens. */
 export const anchor = (heading: string): string =>
@@ -93,7 +92,7 @@ function layout(d: CellFunctionDecl, spoil?: Spoil): Layout {
       parts.push(formulaLiteral(value ?? (a.sample as Scalar)));
     }
   }
-  const formula = `=${fullName(d)}(${parts.join(', ')})`;
+  const formula = `=${formulaName(d)}(${parts.join(', ')})`;
   return { sheet: { cells, formulas: [{ at: { row: 0, col }, formula }] }, holds, labels };
 }
 
@@ -155,9 +154,9 @@ export function functionsDocModel(decls: readonly CellFunctionDecl[] = catalog):
     const computedExample = take();
     const tried = p.errors.map((e) => ({ ...e, computed: take() }));
     const flagged = computedExample.result.flat().find(isError);
-    if (flagged) throw new Error(`${fullName(p.decl)}: the example on the declared samples gives ${flagged.error} ${flagged.message}`);
+    if (flagged) throw new Error(`${formulaName(p.decl)}: the example on the declared samples gives ${flagged.error} ${flagged.message}`);
     const chosen = tried.find((t) => t.computed.result.length === 1 && t.computed.result[0]!.length === 1 && isValueError(t.computed.result[0]![0]!));
-    if (!chosen) throw new Error(`${fullName(p.decl)}: no error example gives #VALUE!`);
+    if (!chosen) throw new Error(`${formulaName(p.decl)}: no error example gives #VALUE!`);
     return { decl: p.decl, example: p.example, computed: computedExample, spoil: chosen.spoil, error: chosen.layout, computedError: chosen.computed };
   });
   return { functions, intro };
@@ -169,7 +168,7 @@ const isValueError = (v: ShownValue): boolean => isError(v) && v.error === '#VAL
 // Rendering
 
 function signature(d: CellFunctionDecl): string {
-  return `${fullName(d)}(${d.args.map((a) => (a.optional ? `[${a.name}]` : a.name)).join(', ')})`;
+  return `${formulaName(d)}(${d.args.map((a) => (a.optional ? `[${a.name}]` : a.name)).join(', ')})`;
 }
 
 function unitOf(a: ArgDecl): string {
@@ -247,7 +246,7 @@ function errorText(f: FunctionExample): string {
 function functionSection(f: FunctionExample): string {
   const d = f.decl;
   return [
-    `### ${fullName(d)}`,
+    `### ${formulaName(d)}`,
     '',
     d.help,
     '',
@@ -335,7 +334,7 @@ row for the input. Each function's error example below shows the message the eng
 export function functionsDoc(m: FunctionsDocModel = functionsDocModel()): string {
   const groups = groupsOf(m.functions);
   const contents = groups.map(
-    (g) => `- [${g.group}](#${anchor(g.group)}): ${g.functions.map((f) => `[${f.decl.name}](#${anchor(fullName(f.decl))})`).join(' · ')}`,
+    (g) => `- [${g.group}](#${anchor(g.group)}): ${g.functions.map((f) => `[${f.decl.name}](#${anchor(formulaName(f.decl))})`).join(' · ')}`,
   );
   const body = groups.map((g) => [`## ${g.group}`, '', ...g.functions.map((f) => `${functionSection(f)}\n`)].join('\n'));
   return `${intro(m)}\n\n## Contents\n\n${contents.join('\n')}\n\n${body.join('\n').trimEnd()}\n`;

@@ -4,7 +4,7 @@
  * Run: npx tsx scripts/make-fleet.ts OUT.xlsx [ROWS=10000]; then time node dist/cli/fluxbook.js calc OUT.xlsx --out …
  */
 import ExcelJS from 'exceljs';
-import { FLEET, measuredRatio } from '../src/cli/fernhill';
+import { FLEET, measuredRatio } from '../src/demo';
 
 export function largeFleetWorkbook(rows: number): ExcelJS.Workbook {
   const wb = new ExcelJS.Workbook();

@@ -1,11 +1,17 @@
 /**
  * The one adapter between spreadsheet cells and the core: it coerces cell values, applies the
- * defaults of blank optional arguments, broadcasts ranges like Excel array arithmetic, calls the
- * core once per result element, and turns refusals into error values. Excel, the embedded engine
- * and the tests all go through here; only the error values they need differ (ErrorFactory).
+ * defaults of blank optional arguments, parses choice arguments, broadcasts ranges like Excel
+ * array arithmetic, calls the core once per result element, and turns refusals into error
+ * values. Excel, the embedded engine and the tests all go through here; only the error values
+ * they need differ (ErrorFactory).
+ *
+ * A call runs three steps: resolve the shape (each argument read as a matrix and folded into the
+ * broadcast shape), coerce the constants (series and single cells, once per call), then evaluate
+ * each element (the ranged arguments read straight from their cells, then compute).
  */
-import { InputError, NoAnswerError, NotInTableError } from '../core/errors';
-import type { ArgDecl, CellFunctionDecl, Scalar } from './declaration';
+import { argumentMessage, InputError, NoAnswerError, NotInTableError } from '../core/errors';
+import { notAnOption, optionMatcher } from '../core/guards';
+import type { ArgDecl, ArgValue, BlockCompute, CellFunctionDecl, EachCompute, Scalar } from './declaration';
 
 /** The Excel error an element gets: #VALUE! (bad input), #NUM! (no numeric answer), #N/A (no table row). */
 export type ErrorKind = 'VALUE' | 'NUM' | 'NA';
@@ -34,39 +40,83 @@ export class CellError {
 }
 export const plainErrors: ErrorFactory = (kind, message) => new CellError(kind, message);
 
-/** An argument coerced once, before broadcasting: its shape, values and per-element faults. */
-interface Coerced {
-  readonly rows: number;
-  readonly cols: number;
-  readonly values: unknown[];
-  /** Per-element faults — a refusal message or a host error passed through — or null when every element is usable. */
-  readonly faults: unknown[] | null;
+/** Why an element, or the whole result, has no value: a refusal of ours, or the host's own error value. */
+export type Fault = { readonly kind: 'refused'; readonly message: string } | { readonly kind: 'host'; readonly value: unknown };
+
+const refused = (name: string, reason: string): Fault => ({ kind: 'refused', message: argumentMessage(name, reason) });
+const hostError = (value: unknown): Fault => ({ kind: 'host', value });
+
+/** The cell a fault shows as: #VALUE! with the message, or the host's error value unchanged. */
+function faultCell(fault: Fault, makeError: ErrorFactory): unknown {
+  return fault.kind === 'refused' ? makeError('VALUE', fault.message) : fault.value;
 }
 
-class WholeArgumentError extends Error {}
-
-/** A host error value met in a series or block argument: it becomes the whole result. */
-class PassedError {
-  constructor(readonly value: unknown) {}
+/** Thrown by a step when one fault is the whole result (a series, a shape, a block argument). */
+class WholeResultFault extends Error {
+  constructor(readonly fault: Fault) {
+    super(fault.kind === 'refused' ? fault.message : 'a host error value in an argument');
+    this.name = 'WholeResultFault';
+  }
 }
 
-const noHostErrors = (): boolean => false;
+type IsError = (value: unknown) => boolean;
+const noHostErrors: IsError = () => false;
 
 const isBlank = (v: unknown): boolean => v === null || v === undefined || v === '';
 
+/** The fast path, the same everywhere: a finite number costs one type test and one subtraction. */
+const isFiniteNumber = (v: unknown): v is number => typeof v === 'number' && v - v === 0;
+
+// ---------------------------------------------------------------------------------------------
+// Step 1: resolve the shape
+// ---------------------------------------------------------------------------------------------
+
+/** An argument as a rectangular matrix of cells: a single value is 1×1, an empty range one blank. */
 function asMatrix(name: string, value: unknown): unknown[][] {
   if (!Array.isArray(value)) return [[value]];
   if (value.length === 0) return [[null]];
   if (!Array.isArray(value[0])) return [value];
   const width = (value[0] as unknown[]).length;
   for (const row of value) {
-    if (!Array.isArray(row) || row.length !== width) {
-      throw new WholeArgumentError(`argument ${name}: is not a rectangular range`);
-    }
+    if (!Array.isArray(row) || row.length !== width) throw new WholeResultFault(refused(name, 'is not a rectangular range'));
   }
   if (width === 0) return [[null]];
   return value as unknown[][];
 }
+
+/** The broadcast shape so far: 1×1 fits anything, n×1 fits n×m, 1×m fits n×m. */
+class Shape {
+  rows = 1;
+  cols = 1;
+  private rowsFrom = '';
+  private colsFrom = '';
+
+  /** Folds in one argument's matrix; a height or width that fits neither refuses the whole call. */
+  include(name: string, m: unknown[][]): void {
+    const r = m.length;
+    const c = m[0]!.length;
+    if (r !== 1) {
+      if (this.rows !== 1 && r !== this.rows) throw mismatch(this.rowsFrom, this.rows, name, r, 'rows', 'height');
+      this.rows = r;
+      this.rowsFrom = name;
+    }
+    if (c !== 1) {
+      if (this.cols !== 1 && c !== this.cols) throw mismatch(this.colsFrom, this.cols, name, c, 'columns', 'width');
+      this.cols = c;
+      this.colsFrom = name;
+    }
+  }
+}
+
+/** The one message that names two arguments: their ranges cannot be broadcast together. */
+function mismatch(first: string, n: number, second: string, m: number, unit: string, extent: string): WholeResultFault {
+  const message = `argument ${first} is ${n} ${unit}, ${second} is ${m} ${unit}; give ranges of the same ${extent} or a single cell`;
+  return new WholeResultFault({ kind: 'refused', message });
+}
+
+// ---------------------------------------------------------------------------------------------
+// Step 2: coerce — a cell for its argument, a series whole
+// ---------------------------------------------------------------------------------------------
 
 function describe(v: unknown): string {
   if (typeof v === 'string') return `"${v.length > 40 ? `${v.slice(0, 40)}…` : v}" is text`;
@@ -75,84 +125,100 @@ function describe(v: unknown): string {
   return 'is not a cell value';
 }
 
-/** Coerces one cell for one argument: the value the core receives, or a refusal message. */
-function coerceCell(arg: ArgDecl, v: unknown): { value?: unknown; fault?: string } {
-  if (isBlank(v)) {
-    if (!arg.optional) return { fault: `argument ${arg.name}: is blank; a value is required` };
-    return { value: arg.default };
-  }
-  switch (arg.type) {
-    case 'number':
-      if (typeof v === 'number') {
-        return Number.isFinite(v) ? { value: v } : { fault: `argument ${arg.name}: must be a finite number` };
-      }
-      return { fault: `argument ${arg.name}: ${describe(v)}; a number is needed (${arg.unit})` };
-    case 'text':
-      if (typeof v === 'string') return { value: v };
-      return { fault: `argument ${arg.name}: ${describe(v)}; text such as "${String(arg.sample)}" is needed` };
-    case 'boolean':
-      if (typeof v === 'boolean') return { value: v };
-      if (v === 0 || v === 1) return { value: v === 1 };
-      if (typeof v === 'string' && /^(true|false)$/i.test(v.trim())) return { value: v.trim().toLowerCase() === 'true' };
-      return { fault: `argument ${arg.name}: ${describe(v)}; TRUE or FALSE is needed` };
-  }
+/**
+ * Reads one cell for one argument into buf[k]: the value compute receives, or the fault that
+ * stops it. Each argument gets its reader once, when the function is adapted.
+ */
+type CellReader = (v: unknown, buf: ArgValue[], k: number) => Fault | undefined;
+
+function cellReader(arg: ArgDecl, isError: IsError): CellReader {
+  const typed = typedReader(arg);
+  const blank = arg.optional ? undefined : refused(arg.name, 'is blank; a value is required');
+  const fallback = arg.default as ArgValue;
+  return (v, buf, k) => {
+    if (isError(v)) return hostError(v);
+    if (isBlank(v)) {
+      buf[k] = fallback;
+      return blank;
+    }
+    return typed(v, buf, k);
+  };
 }
 
-function coerceBroadcast(arg: ArgDecl, raw: unknown, isError: (v: unknown) => boolean): Coerced {
-  const m = asMatrix(arg.name, raw);
-  const rows = m.length;
-  const cols = m[0]!.length;
-  const values = new Array<unknown>(rows * cols);
-  let faults: unknown[] | null = null;
-  let k = 0;
-  for (let i = 0; i < rows; i++) {
-    const row = m[i]!;
-    for (let j = 0; j < cols; j++, k++) {
-      const v = row[j];
-      // The common case, a finite number for a number argument, costs one test.
-      if (arg.type === 'number' && typeof v === 'number' && Number.isFinite(v)) {
-        values[k] = v;
-        continue;
+/** The reader of a present, non-error cell, by the argument's type. */
+function typedReader(arg: ArgDecl): CellReader {
+  const name = arg.name;
+  switch (arg.type) {
+    case 'number':
+      return (v, buf, k) => {
+        if (isFiniteNumber(v)) {
+          buf[k] = v;
+          return undefined;
+        }
+        return refused(name, typeof v === 'number' ? 'must be a finite number' : `${describe(v)}; a number is needed (${arg.unit})`);
+      };
+    case 'text': {
+      const notText = (v: unknown) => refused(name, `${describe(v)}; text such as "${String(arg.sample)}" is needed`);
+      const choices = arg.choices;
+      if (choices === undefined) {
+        return (v, buf, k) => {
+          if (typeof v !== 'string') return notText(v);
+          buf[k] = v;
+          return undefined;
+        };
       }
-      const c: { value?: unknown; fault?: unknown } = isError(v) ? { fault: v } : coerceCell(arg, v);
-      if (c.fault !== undefined) {
-        faults ??= new Array<unknown>(rows * cols);
-        faults[k] = c.fault;
-      } else {
-        values[k] = c.value;
-      }
+      const match = optionMatcher(choices.options, choices.aliases);
+      return (v, buf, k) => {
+        if (typeof v !== 'string') return notText(v);
+        const option = match(v);
+        if (option === undefined) return refused(name, notAnOption(v, choices.options, choices.aliases));
+        buf[k] = option;
+        return undefined;
+      };
     }
+    case 'boolean':
+      return (v, buf, k) => {
+        if (typeof v === 'boolean') buf[k] = v;
+        else if (v === 0 || v === 1) buf[k] = v === 1;
+        else if (typeof v === 'string' && /^(true|false)$/i.test(v.trim())) buf[k] = v.trim().toLowerCase() === 'true';
+        else return refused(name, `${describe(v)}; TRUE or FALSE is needed`);
+        return undefined;
+      };
   }
-  return { rows, cols, values, faults };
 }
 
 /**
  * A series arrives as any block of cells and is read row by row. Blank cells after the last value
- * are dropped (a range drawn longer than the data); a blank inside the series is refused.
+ * are dropped (a range drawn longer than the data); a blank inside the series is refused. Any
+ * fault is the whole result's.
  */
-function coerceSeries(arg: ArgDecl, raw: unknown, isError: (v: unknown) => boolean): Float64Array | undefined {
+function coerceSeries(arg: ArgDecl, raw: unknown, isError: IsError): Float64Array | undefined {
   const m = asMatrix(arg.name, raw);
   const flat: unknown[] = [];
   for (const row of m) for (const v of row) flat.push(v);
   let end = flat.length;
   while (end > 0 && isBlank(flat[end - 1])) end--;
   if (end === 0) {
-    if (!arg.optional) throw new WholeArgumentError(`argument ${arg.name}: is blank; give a range of values`);
+    if (!arg.optional) throw new WholeResultFault(refused(arg.name, 'is blank; give a range of values'));
     return arg.default === undefined ? undefined : Float64Array.of(arg.default as number);
   }
   const out = new Float64Array(end);
   for (let i = 0; i < end; i++) {
     const v = flat[i];
-    if (typeof v === 'number' && Number.isFinite(v)) {
+    if (isFiniteNumber(v)) {
       out[i] = v;
       continue;
     }
-    if (isError(v)) throw new PassedError(v);
+    if (isError(v)) throw new WholeResultFault(hostError(v));
     const what = isBlank(v) ? 'is blank' : typeof v === 'number' ? 'is not a finite number' : describe(v);
-    throw new WholeArgumentError(`argument ${arg.name}: value ${i + 1} ${what}; every value of the series must be a number (${arg.unit})`);
+    throw new WholeResultFault(refused(arg.name, `value ${i + 1} ${what}; every value of the series must be a number (${arg.unit})`));
   }
   return out;
 }
+
+// ---------------------------------------------------------------------------------------------
+// Step 3: evaluate — compute's refusals and results as cells
+// ---------------------------------------------------------------------------------------------
 
 function refusal(error: unknown, makeError: ErrorFactory): unknown {
   if (error instanceof InputError) return makeError('VALUE', error.message);
@@ -166,25 +232,8 @@ function resultCell(value: Scalar, makeError: ErrorFactory): unknown {
   return value;
 }
 
-/** Builds the spreadsheet-facing function for a declaration. */
-export function adapt(decl: CellFunctionDecl, makeError: ErrorFactory, options: AdaptOptions = {}): CellFunction {
-  const args = decl.args;
-  const isError = options.isError ?? noHostErrors;
-  return (...raw: unknown[]): unknown[][] => {
-    try {
-      return decl.kind === 'each'
-        ? runEach(decl.compute, args, raw, makeError, isError)
-        : runBlock(decl.compute, args, raw, makeError, isError);
-    } catch (error) {
-      if (error instanceof WholeArgumentError) return [[makeError('VALUE', error.message)]];
-      if (error instanceof PassedError) return [[error.value]];
-      return [[refusal(error, makeError)]];
-    }
-  };
-}
-
 /** Calls compute with the buffer's values without spreading an array on every element. */
-function caller(compute: (...a: any[]) => Scalar, n: number): (b: unknown[]) => Scalar {
+function caller(compute: EachCompute, n: number): (b: ArgValue[]) => Scalar {
   switch (n) {
     case 1:
       return (b) => compute(b[0]);
@@ -206,30 +255,30 @@ function caller(compute: (...a: any[]) => Scalar, n: number): (b: unknown[]) => 
 /** A ranged argument, read straight from its cells in the element loop (no copy of the range). */
 interface Varying {
   readonly k: number;
-  readonly decl: ArgDecl;
   readonly cells: unknown[][];
+  readonly read: CellReader;
   readonly numeric: boolean;
   readonly rowSel: number;
   readonly colSel: number;
 }
 
-function runEach(
-  compute: (...a: any[]) => Scalar,
-  decls: readonly ArgDecl[],
-  raw: unknown[],
-  makeError: ErrorFactory,
-  isError: (v: unknown) => boolean,
-): unknown[][] {
+/** What steps 1 and 2 leave for the element loop. */
+interface Prepared {
+  readonly rows: number;
+  readonly cols: number;
+  readonly buf: ArgValue[];
+  readonly varying: readonly Varying[];
+  /** The first single-cell argument's fault: it spoils every element alike. */
+  readonly constantFault: Fault | undefined;
+}
+
+/** Steps 1 and 2 for an `each` function, argument by argument in declaration order. */
+function prepare(decls: readonly ArgDecl[], readers: readonly CellReader[], raw: unknown[], isError: IsError): Prepared {
   const n = decls.length;
-  const buf = new Array<unknown>(n);
+  const buf = new Array<ArgValue>(n);
   const varying: Varying[] = [];
-  let rows = 1;
-  let cols = 1;
-  let rowsFrom = '';
-  let colsFrom = '';
-  // A single-cell argument's fault spoils every element alike; the first one found is reported.
-  // A message becomes #VALUE!; a host error value is passed through as it is.
-  let constantFault: unknown;
+  const shape = new Shape();
+  let constantFault: Fault | undefined;
   for (let k = 0; k < n; k++) {
     const d = decls[k]!;
     if (d.series) {
@@ -237,44 +286,40 @@ function runEach(
       continue;
     }
     const m = asMatrix(d.name, raw[k]);
+    shape.include(d.name, m);
     const r = m.length;
     const c = m[0]!.length;
-    if (r !== 1) {
-      if (rows !== 1 && r !== rows) throw new WholeArgumentError(`argument ${rowsFrom} is ${rows} rows, ${d.name} is ${r} rows; give ranges of the same height or a single cell`);
-      rows = r;
-      rowsFrom = d.name;
-    }
-    if (c !== 1) {
-      if (cols !== 1 && c !== cols) throw new WholeArgumentError(`argument ${colsFrom} is ${cols} columns, ${d.name} is ${c} columns; give ranges of the same width or a single cell`);
-      cols = c;
-      colsFrom = d.name;
-    }
     if (r === 1 && c === 1) {
-      // Coerced once and held in the buffer for every element.
-      const cell = m[0]![0];
-      const one: { value?: unknown; fault?: unknown } = isError(cell) ? { fault: cell } : coerceCell(d, cell);
-      buf[k] = one.value;
-      if (one.fault !== undefined && constantFault === undefined) constantFault = one.fault;
+      const fault = readers[k]!(m[0]![0], buf, k);
+      if (fault !== undefined) constantFault ??= fault;
     } else {
-      varying.push({ k, decl: d, cells: m, numeric: d.type === 'number', rowSel: r === 1 ? 0 : 1, colSel: c === 1 ? 0 : 1 });
+      varying.push({ k, cells: m, read: readers[k]!, numeric: d.type === 'number', rowSel: r === 1 ? 0 : 1, colSel: c === 1 ? 0 : 1 });
     }
   }
-  const call = caller(compute, n);
+  return { rows: shape.rows, cols: shape.cols, buf, varying, constantFault };
+}
+
+function runEach(
+  call: (b: ArgValue[]) => Scalar,
+  decls: readonly ArgDecl[],
+  readers: readonly CellReader[],
+  raw: unknown[],
+  makeError: ErrorFactory,
+  isError: IsError,
+): unknown[][] {
+  const { rows, cols, buf, varying, constantFault } = prepare(decls, readers, raw, isError);
   const v = varying.length;
   const element = (i: number, j: number): unknown => {
-    if (constantFault !== undefined) return typeof constantFault === 'string' ? makeError('VALUE', constantFault) : constantFault;
+    if (constantFault !== undefined) return faultCell(constantFault, makeError);
     for (let q = 0; q < v; q++) {
       const a = varying[q]!;
       const cell = a.cells[i * a.rowSel]![j * a.colSel];
-      // The common case, a finite number for a number argument, costs one test.
-      if (a.numeric && typeof cell === 'number' && cell - cell === 0) {
+      if (a.numeric && isFiniteNumber(cell)) {
         buf[a.k] = cell;
         continue;
       }
-      if (isError(cell)) return cell;
-      const c = coerceCell(a.decl, cell);
-      if (c.fault !== undefined) return makeError('VALUE', c.fault);
-      buf[a.k] = c.value;
+      const fault = a.read(cell, buf, a.k);
+      if (fault !== undefined) return faultCell(fault, makeError);
     }
     try {
       return resultCell(call(buf), makeError);
@@ -295,25 +340,47 @@ function runEach(
   return out;
 }
 
+/** A block function takes single values (or whole series); any fault is the whole result. */
 function runBlock(
-  compute: (...a: any[]) => Scalar[][],
+  compute: BlockCompute,
   decls: readonly ArgDecl[],
+  readers: readonly CellReader[],
   raw: unknown[],
   makeError: ErrorFactory,
-  isError: (v: unknown) => boolean,
+  isError: IsError,
 ): unknown[][] {
-  const values = decls.map((d, k) => {
-    if (d.series) return coerceSeries(d, raw[k], isError);
-    const c = coerceBroadcast(d, raw[k], isError);
-    if (c.rows !== 1 || c.cols !== 1) {
-      throw new WholeArgumentError(`argument ${d.name}: is ${c.rows}×${c.cols} cells; this function takes a single value here`);
+  const values = new Array<ArgValue>(decls.length);
+  decls.forEach((d, k) => {
+    if (d.series) {
+      values[k] = coerceSeries(d, raw[k], isError);
+      return;
     }
-    if (c.faults !== null) {
-      const fault = c.faults[0];
-      throw typeof fault === 'string' ? new WholeArgumentError(fault) : new PassedError(fault);
+    const m = asMatrix(d.name, raw[k]);
+    if (m.length !== 1 || m[0]!.length !== 1) {
+      throw new WholeResultFault(refused(d.name, `is ${m.length}×${m[0]!.length} cells; this function takes a single value here`));
     }
-    return c.values[0];
+    const fault = readers[k]!(m[0]![0], values, k);
+    if (fault !== undefined) throw new WholeResultFault(fault);
   });
   const result = compute(...values);
   return result.map((row) => row.map((v) => resultCell(v, makeError)));
+}
+
+/** Builds the spreadsheet-facing function for a declaration. */
+export function adapt(decl: CellFunctionDecl, makeError: ErrorFactory, options: AdaptOptions = {}): CellFunction {
+  const args = decl.args;
+  const isError = options.isError ?? noHostErrors;
+  const readers = args.map((a) => cellReader(a, isError));
+  const run =
+    decl.kind === 'each'
+      ? ((call) => (raw: unknown[]) => runEach(call, args, readers, raw, makeError, isError))(caller(decl.compute, args.length))
+      : (raw: unknown[]) => runBlock(decl.compute, args, readers, raw, makeError, isError);
+  return (...raw: unknown[]): unknown[][] => {
+    try {
+      return run(raw);
+    } catch (error) {
+      if (error instanceof WholeResultFault) return [[faultCell(error.fault, makeError)]];
+      return [[refusal(error, makeError)]];
+    }
+  };
 }

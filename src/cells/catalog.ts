@@ -42,7 +42,15 @@ export const catalog: readonly CellFunctionDecl[] = groups.flatMap((g) =>
 
 export const NAMESPACE = 'XFMR';
 
+/** The name a function has in formulas, XFMR.EFF for EFF: the one place the namespace is joined on. */
+export function formulaName(decl: { readonly name: string } | string): string {
+  return `${NAMESPACE}.${typeof decl === 'string' ? decl : decl.name}`;
+}
+
+/** The declaration of EFF, eff or XFMR.EFF. */
 export function findFunction(name: string): CellFunctionDecl | undefined {
-  const upper = name.toUpperCase().replace(/^XFMR\./, '');
-  return catalog.find((d) => d.name === upper);
+  const upper = name.toUpperCase();
+  const prefix = formulaName('');
+  const bare = upper.startsWith(prefix) ? upper.slice(prefix.length) : upper;
+  return catalog.find((d) => d.name === bare);
 }

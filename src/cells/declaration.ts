@@ -2,16 +2,29 @@
  * The one declaration of a cell function. Everything else about a function — the Excel
  * registration, functions.json, the embedded-engine registration, the reference docs and the
  * fuzz tests' argument lists — is derived from this, so nothing is written twice.
+ *
+ * The argument builders (num, text, choice, bool, series) carry the type of the value the adapter
+ * hands to compute, so `each({ args: [num(...), choice(...)], compute })` checks compute's
+ * parameters against the declared arguments.
  */
 export type Scalar = number | string | boolean;
 
 export type ArgType = 'number' | 'text' | 'boolean';
 
+/** A value compute can receive: what the adapter makes of a cell or a range for one argument. */
+export type ArgValue = number | string | boolean | Float64Array | undefined;
+
+/** The options of a `choice` argument: the spellings compute receives, and other accepted spellings. */
+export interface Choices {
+  readonly options: readonly string[];
+  readonly aliases: Readonly<Record<string, string>>;
+}
+
 export interface ArgDecl {
   /** snake_case, the trade's words with the unit where it helps: `kva`, `p0_w`, `hv_v`. */
   readonly name: string;
   readonly help: string;
-  /** The unit the value is read in, as DESIGN.md fixes it: kVA, V, A, W, kWh, °C, h, per unit... */
+  /** The unit the value is read in: kVA, V, A, W, kWh, °C, h, per unit... */
   readonly unit: string;
   readonly type: ArgType;
   /** Optional arguments may be left blank or omitted; `default` is then applied by the adapter. */
@@ -21,7 +34,18 @@ export interface ArgDecl {
   readonly series: boolean;
   /** A valid value, used by the docs' worked example and by the bundle tests. */
   readonly sample: Scalar | readonly number[];
+  /** A text argument with a fixed set of options, parsed by the adapter (see `choice`). */
+  readonly choices?: Choices;
 }
+
+/** An argument declaration that also records the type compute receives for it. */
+export interface Arg<V extends ArgValue> extends ArgDecl {
+  /** Type-level only: never set. */
+  readonly __value?: V;
+}
+
+/** The values compute receives, in declaration order. */
+export type ArgValues<A extends readonly ArgDecl[]> = { -readonly [K in keyof A]: A[K] extends Arg<infer V> ? V : ArgValue };
 
 export interface ResultDecl {
   readonly type: 'number' | 'boolean' | 'text';
@@ -41,51 +65,106 @@ interface CommonDecl {
   readonly result: ResultDecl;
 }
 
+/**
+ * compute as the adapter sees it. The adapter builds each value from the argument's declaration,
+ * so the values match the parameter types `each`/`block` checked at the declaration.
+ */
+export type EachCompute = (...args: ArgValue[]) => Scalar;
+export type BlockCompute = (...args: ArgValue[]) => Scalar[][];
+
 /** One result per element of the broadcast shape of the non-series arguments. */
 export interface EachDecl extends CommonDecl {
   readonly kind: 'each';
-  // Arguments arrive coerced and in declaration order: numbers, strings, booleans,
-  // Float64Array for series, undefined for an omitted optional without a default.
-  readonly compute: (...args: any[]) => Scalar;
+  readonly compute: EachCompute;
 }
 
 /** One block of results (a curve, a series, a share per unit) from single-valued arguments. */
 export interface BlockDecl extends CommonDecl {
   readonly kind: 'block';
-  readonly compute: (...args: any[]) => Scalar[][];
+  readonly compute: BlockCompute;
 }
 
 export type CellFunctionDecl = EachDecl | BlockDecl;
 
-interface ArgOptions {
-  readonly default?: Scalar;
-  readonly optional?: boolean;
+/** What a declaration file writes: compute typed from the declared arguments. */
+type Spec<A extends readonly ArgDecl[], R> = Omit<CommonDecl, 'args'> & {
+  readonly args: A;
+  readonly compute: (...args: ArgValues<A>) => R;
+};
+
+/** The option shapes of the builders: required, with a default, or blank-able without one. */
+interface NoDefault {
+  readonly default?: undefined;
+  readonly optional?: false;
+}
+interface Defaulted<T extends Scalar> {
+  readonly default: T;
+}
+interface Blankable {
+  readonly default?: undefined;
+  readonly optional: true;
 }
 
-function arg(type: ArgType, name: string, unit: string, help: string, sample: Scalar, options: ArgOptions = {}): ArgDecl {
+function arg(type: ArgType, name: string, unit: string, help: string, sample: Scalar, options: { default?: Scalar; optional?: boolean } = {}): ArgDecl {
   const optional = options.optional ?? options.default !== undefined;
   return { name, help, unit, type, optional, default: options.default, series: false, sample };
 }
 
-export const num = (name: string, unit: string, help: string, sample: number, options?: ArgOptions) =>
-  arg('number', name, unit, help, sample, options);
+export function num(name: string, unit: string, help: string, sample: number, options?: NoDefault | Defaulted<number>): Arg<number>;
+export function num(name: string, unit: string, help: string, sample: number, options: Blankable): Arg<number | undefined>;
+export function num(name: string, unit: string, help: string, sample: number, options?: { default?: number; optional?: boolean }): ArgDecl {
+  return arg('number', name, unit, help, sample, options);
+}
 
-export const text = (name: string, help: string, sample: string, options?: ArgOptions) =>
-  arg('text', name, '', help, sample, options);
+/** Free text the core reads as a notation of the trade (a vector group such as Dyn11). */
+export function text(name: string, help: string, sample: string, options?: NoDefault | Defaulted<string>): Arg<string>;
+export function text(name: string, help: string, sample: string, options: Blankable): Arg<string | undefined>;
+export function text(name: string, help: string, sample: string, options?: { default?: string; optional?: boolean }): ArgDecl {
+  return arg('text', name, '', help, sample, options);
+}
 
-export const bool = (name: string, help: string, sample: boolean, options?: ArgOptions) =>
-  arg('boolean', name, '', help, sample, options);
+export function bool(name: string, help: string, sample: boolean, options?: NoDefault | Defaulted<boolean>): Arg<boolean>;
+export function bool(name: string, help: string, sample: boolean, options: Blankable): Arg<boolean | undefined>;
+export function bool(name: string, help: string, sample: boolean, options?: { default?: boolean; optional?: boolean }): ArgDecl {
+  return arg('boolean', name, '', help, sample, options);
+}
+
+/**
+ * One of a fixed set of text options. The adapter matches the cell's text once per cell — case,
+ * surrounding blanks and the separator (blank, _ or -) do not matter; an alias stands for its
+ * option — and compute receives the option as `options` spells it. Unknown text is #VALUE!.
+ */
+export function choice<const T extends string>(
+  name: string,
+  help: string,
+  spec: { readonly options: readonly T[]; readonly aliases?: Readonly<Record<string, T>>; readonly default?: T },
+): Arg<T> {
+  const { options, aliases = {}, default: fallback } = spec;
+  return {
+    name,
+    help,
+    unit: '',
+    type: 'text',
+    optional: fallback !== undefined,
+    default: fallback,
+    series: false,
+    sample: fallback ?? options[0]!,
+    choices: { options, aliases },
+  };
+}
 
 /** A series of numbers taken whole; a blank optional series becomes the one-value series [default]. */
-export function series(name: string, unit: string, help: string, sample: readonly number[], options: ArgOptions = {}): ArgDecl {
+export function series(name: string, unit: string, help: string, sample: readonly number[], options?: NoDefault | Defaulted<number>): Arg<Float64Array>;
+export function series(name: string, unit: string, help: string, sample: readonly number[], options: Blankable): Arg<Float64Array | undefined>;
+export function series(name: string, unit: string, help: string, sample: readonly number[], options: { default?: number; optional?: boolean } = {}): ArgDecl {
   const optional = options.optional ?? options.default !== undefined;
   return { name, help, unit, type: 'number', optional, default: options.default, series: true, sample };
 }
 
-export function each(decl: Omit<EachDecl, 'kind'>): EachDecl {
-  return { kind: 'each', ...decl };
+export function each<const A extends readonly ArgDecl[]>(decl: Spec<A, Scalar>): EachDecl {
+  return { kind: 'each', ...decl, compute: decl.compute as unknown as EachCompute };
 }
 
-export function block(decl: Omit<BlockDecl, 'kind'>): BlockDecl {
-  return { kind: 'block', ...decl };
+export function block<const A extends readonly ArgDecl[]>(decl: Spec<A, Scalar[][]>): BlockDecl {
+  return { kind: 'block', ...decl, compute: decl.compute as unknown as BlockCompute };
 }

@@ -3,9 +3,23 @@ import { promises as fs } from 'node:fs';
 import { join } from 'node:path';
 import { SAFETY_NOTE } from '../cells/metadata';
 import type { FormulaResult, JsonValue } from '../engine/xlsx';
+import {
+  BID_CELLS,
+  bidWorkbook,
+  EVALUATION,
+  FLEET,
+  FLEET_COLUMNS,
+  fleetRow,
+  fleetWorkbook,
+  OFFER_COLUMNS,
+  OFFER_ROW,
+  OFFERS,
+  YEAR_CELLS,
+  YEAR_COOLING,
+  YEAR_UNIT,
+  yearWorkbook,
+} from '../demo';
 import { recalculateAndSave } from './calc';
-import { BID_CELLS, bidWorkbook, EVALUATION, OFFER_COLUMNS, OFFER_ROW, OFFERS } from './bids';
-import { FLEET, FLEET_COLUMNS, fleetWorkbook, YEAR_CELLS, YEAR_COOLING, YEAR_UNIT, yearWorkbook } from './fernhill';
 import { checkOutput, writeAtomically } from './files';
 
 export const FLEET_FILE = 'fernhill-fleet.xlsx';
@@ -65,9 +79,9 @@ export async function demo(options: DemoOptions): Promise<DemoSummary> {
   const rows = FLEET.map((u, i) => ({
     id: u.id,
     location: u.location,
-    ok: fleetCalc.results.find((r) => r.cell === `${c.ratioOk}${i + 2}`)?.value,
-    deviation: numberAt(fleetCalc.results, 'Fleet', `${c.deviation}${i + 2}`),
-    efficiency: numberAt(fleetCalc.results, 'Fleet', `${c.eff50}${i + 2}`),
+    ok: fleetCalc.results.find((r) => r.cell === `${c.ratioOk}${fleetRow(i)}`)?.value,
+    deviation: numberAt(fleetCalc.results, 'Fleet', `${c.deviation}${fleetRow(i)}`),
+    efficiency: numberAt(fleetCalc.results, 'Fleet', `${c.eff50}${fleetRow(i)}`),
   }));
   const worst = rows.reduce((a, b) => (b.efficiency < a.efficiency ? b : a));
   return {

@@ -3,8 +3,8 @@
  * practice). Ratings in kVA, voltages in V line-to-line, currents in A.
  */
 import { InputError } from './errors';
-import { perUnitImpedance, phaseCount, positive } from './guards';
-import { parseVectorGroup } from './vectorGroup';
+import { oneOf, perUnitImpedance, phaseCount, positive } from './guards';
+import { parseVectorGroup, type Connection } from './vectorGroup';
 
 const SQRT3 = Math.sqrt(3);
 
@@ -29,9 +29,9 @@ export function windingCurrent(kva: number, volts: number, connection: string, p
   return connectionOf(connection, side) === 'D' ? line / SQRT3 : line;
 }
 
-function connectionOf(text: string, side: WindingSide | undefined): 'D' | 'Y' | 'Z' {
-  const t = String(text).trim().toUpperCase();
-  if (/\d$/.test(t)) {
+/** The connection of the winding `v` belongs to: its letter (YN and ZN name the neutral), or a vector group with the side. */
+function connectionOf(text: string, side: WindingSide | undefined): Connection {
+  if (/\d\s*$/.test(String(text))) {
     const group = parseVectorGroup('vector_letter', text);
     if (side === undefined) {
       const hv = group.text.match(/^[A-Z]+/)![0];
@@ -43,10 +43,7 @@ function connectionOf(text: string, side: WindingSide | undefined): 'D' | 'Y' | 
     }
     return side === 'HV' ? group.hv : group.lv;
   }
-  if (t === 'D') return 'D';
-  if (t === 'Y' || t === 'YN') return 'Y';
-  if (t === 'Z' || t === 'ZN') return 'Z';
-  throw new InputError('vector_letter', `"${text}" is not a winding connection; use D, Y, YN, Z or ZN, or a vector group such as Dyn11 with side "HV" or "LV"`);
+  return oneOf('vector_letter', text, ['D', 'Y', 'Z'] as const, { YN: 'Y', ZN: 'Z' });
 }
 
 export function apparentPowerKva(amps: number, volts: number, phases: number): number {

@@ -4,6 +4,7 @@
  */
 import { NoAnswerError } from './errors';
 import { integerBetween, nonNegative, perUnitLoad, positive, powerFactor } from './guards';
+import { totalLossesAt } from './losses';
 
 export function efficiencyAt(kva: number, p0Watts: number, pkWatts: number, load: number, pf: number): number {
   const s = positive('kva', kva);
@@ -11,7 +12,7 @@ export function efficiencyAt(kva: number, p0Watts: number, pkWatts: number, load
   const pk = nonNegative('pk_w', pkWatts);
   const x = perUnitLoad('load', load);
   const out = x * s * 1000 * powerFactor('pf', pf);
-  const losses = p0 + x * x * pk;
+  const losses = totalLossesAt(p0, pk, x);
   if (out + losses === 0) throw new NoAnswerError('no output and no losses: efficiency is undefined at zero load with zero no-load loss');
   return out / (out + losses);
 }
@@ -25,16 +26,23 @@ export function maxEfficiencyLoad(p0Watts: number, pkWatts: number): number {
   return x;
 }
 
-/** The peak efficiency, at x = √(P0/Pk): there the losses are 2·P0, so η = x·S·pf / (x·S·pf + 2·P0). */
+/** The peak efficiency: the efficiency at x = √(P0/Pk), where the losses are 2·P0. */
 export function maxEfficiency(kva: number, p0Watts: number, pkWatts: number, pf: number): number {
-  const s = positive('kva', kva);
   const x = maxEfficiencyLoad(p0Watts, pkWatts);
-  const out = x * s * 1000 * powerFactor('pf', pf);
-  if (x === 0) return 1; // no core loss at all: efficiency approaches 1 as load falls to 0
-  return out / (out + 2 * p0Watts);
+  if (x === 0) {
+    // No core loss at all: efficiency approaches 1 as the load falls to 0.
+    positive('kva', kva);
+    powerFactor('pf', pf);
+    return 1;
+  }
+  return efficiencyAt(kva, p0Watts, pkWatts, x, pf);
 }
 
-/** Rows of load | efficiency | total losses (W) from 0 to maxLoad in `points` equal steps. */
+/**
+ * Rows of load | efficiency | total losses (W) from 0 to maxLoad in `points` equal steps, each
+ * row computed as EFF and LOSSES compute it; a load with no answer (no output and no losses)
+ * holds NaN, which the cell layer shows as #NUM! in that cell alone.
+ */
 export function efficiencyCurve(
   kva: number,
   p0Watts: number,
@@ -45,18 +53,21 @@ export function efficiencyCurve(
 ): number[][] {
   const n = integerBetween('points', points, 2, 1001);
   const top = positive('max_load', maxLoad);
-  positive('kva', kva);
-  nonNegative('p0_w', p0Watts);
-  nonNegative('pk_w', pkWatts);
-  powerFactor('pf', pf);
   const rows: number[][] = [];
   for (let i = 0; i < n; i++) {
     const x = (top * i) / (n - 1);
-    const losses = p0Watts + x * x * pkWatts;
-    const out = x * kva * 1000 * pf;
-    rows.push([x, out + losses === 0 ? 0 : out / (out + losses), losses]);
+    rows.push([x, efficiencyOrNaN(kva, p0Watts, pkWatts, x, pf), totalLossesAt(p0Watts, pkWatts, x)]);
   }
   return rows;
+}
+
+function efficiencyOrNaN(kva: number, p0Watts: number, pkWatts: number, load: number, pf: number): number {
+  try {
+    return efficiencyAt(kva, p0Watts, pkWatts, load, pf);
+  } catch (error) {
+    if (error instanceof NoAnswerError) return Number.NaN;
+    throw error;
+  }
 }
 
 /**

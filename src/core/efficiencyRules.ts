@@ -7,7 +7,7 @@
  */
 import { efficiencyAt } from './efficiency';
 import { InputError, NotInTableError, shown } from './errors';
-import { nonNegative, oneOf, phaseCount, positive } from './guards';
+import { nonNegative, phaseCount, positive } from './guards';
 
 // ---------------------------------------------------------------------------------------------
 // US DOE, 10 CFR 431.196
@@ -152,12 +152,6 @@ export const DOE_TABLES: readonly DoeTable[] = Object.freeze([
   ...mvTables(2029, 3, '431.196(c)(3)', MVDRY_2029_3),
 ]);
 
-const DOE_KINDS: readonly DoeKind[] = ['liquid', 'submersible', 'lvdry', 'mvdry'];
-
-export function parseDoeKind(text: string): DoeKind {
-  return oneOf('kind', text, DOE_KINDS);
-}
-
 export function parseDoeLevels(value: number): DoeLevels {
   if (value === 2016 || value === 2029) return value;
   throw new InputError('levels', `must be 2016 (units made from 1 January 2016) or 2029 (from 23 April 2029) (got ${shown(value)})`);
@@ -208,8 +202,7 @@ function describeDoe(t: DoeTable): string {
 }
 
 /** The DOE table a unit falls under. */
-export function doeTableFor(kindText: string, phases: number, levels: number, bilKv: number | undefined): DoeTable {
-  const kind = parseDoeKind(kindText);
+export function doeTableFor(kind: DoeKind, phases: number, levels: number, bilKv: number | undefined): DoeTable {
   const p = phaseCount('phases', phases);
   const l = parseDoeLevels(levels);
   return findDoeTable(kind, p, l, kind === 'mvdry' ? bilBand(bilKv) : undefined);
@@ -249,7 +242,7 @@ export function checkDoeScope(kind: DoeKind, hvVolts: number | undefined, lvVolt
 /** Minimum efficiency (fraction) at the regulation's test load and power factor 1. */
 export function doeMinimumEfficiency(
   kva: number,
-  kindText: string,
+  kind: DoeKind,
   phases: number,
   levels: number,
   bilKv: number | undefined,
@@ -257,8 +250,8 @@ export function doeMinimumEfficiency(
   lvVolts?: number,
 ): number {
   const s = positive('kva', kva);
-  checkDoeScope(parseDoeKind(kindText), hvVolts, lvVolts);
-  return doeMinimumOf(doeTableFor(kindText, phases, levels, bilKv), s);
+  checkDoeScope(kind, hvVolts, lvVolts);
+  return doeMinimumOf(doeTableFor(kind, phases, levels, bilKv), s);
 }
 
 function doeMinimumOf(t: DoeTable, kva: number): number {
@@ -320,12 +313,6 @@ const EU_MEDIUM_POWER_MIN_KVA = 5;
 
 export type EuLoss = 'pk' | 'p0';
 
-export function parseEuLoss(text: string): EuLoss {
-  const t = String(text).trim().toLowerCase();
-  if (t === 'po') return 'p0'; // the regulation writes Po
-  return oneOf('which', t, ['pk', 'p0'] as const);
-}
-
 /** Table I.1 covers one winding with Um ≤ 24 kV and the other with Um ≤ 1.1 kV. */
 export const EU_TABLE_MAX_HV_UM_KV = 24;
 export const EU_TABLE_MAX_LV_UM_KV = 1.1;
@@ -353,9 +340,8 @@ export function checkEuScope(hvUmKv: number | undefined, lvUmKv: number | undefi
  * limit is interpolated linearly, as Annex I directs for intermediate ratings (from memory).
  * Above 3150 kVA the regulation sets a minimum peak efficiency index instead: no row.
  */
-export function euMaximumLoss(kva: number, whichText: string, hvUmKv?: number, lvUmKv?: number, poleMounted = false): number {
+export function euMaximumLoss(kva: number, which: EuLoss, hvUmKv?: number, lvUmKv?: number, poleMounted = false): number {
   const s = positive('kva', kva);
-  const which = parseEuLoss(whichText);
   checkEuScope(hvUmKv, lvUmKv, poleMounted);
   if (s < EU_MEDIUM_POWER_MIN_KVA) {
     throw new NotInTableError('kva', `${shown(s)} kVA is below 5 kVA, the smallest medium power transformer of EU 548/2014`);
@@ -389,8 +375,8 @@ export function meetsEfficiencyRule(
   kva: number,
   p0Watts: number,
   pkWatts: number,
-  ruleText: string,
-  kindText: string,
+  rule: Rule,
+  kind: DoeKind,
   phases: number,
   levels: number,
   bilKv: number | undefined,
@@ -400,7 +386,6 @@ export function meetsEfficiencyRule(
   const s = positive('kva', kva);
   const p0 = nonNegative('p0_w', p0Watts);
   const pk = nonNegative('pk_w', pkWatts);
-  const rule = oneOf('rule', ruleText, ['DOE', 'EU', 'both'] as const);
   let euP0 = p0;
   let euPk = pk;
   if (rule === 'both') {
@@ -415,11 +400,10 @@ export function meetsEfficiencyRule(
   }
   let ok = true;
   if (rule !== 'EU') {
-    const t = doeTableFor(kindText, phases, levels, bilKv);
+    const t = doeTableFor(kind, phases, levels, bilKv);
     ok = efficiencyAt(s, p0, pk, t.testLoad, 1) >= doeMinimumOf(t, s);
   }
   if (rule !== 'DOE') {
-    const kind = parseDoeKind(kindText);
     if (kind !== 'liquid' || phaseCount('phases', phases) !== 3) {
       throw new NotInTableError('kind', 'the EU Tier 2 table in Fluxbook covers three-phase liquid-immersed units only');
     }

@@ -72,32 +72,33 @@ export function allDayEfficiency(
   return out / (out + lost);
 }
 
-/** Load factor: mean load over peak load, for equal steps. */
-export function loadFactor(loads: Float64Array): number {
+/** Mean load, mean of load² and peak load of a checked profile of equal steps. */
+function loadStatistics(loads: Float64Array): { mean: number; meanSquare: number; peak: number } {
   eachOf('loads', nonEmpty('loads', loads), perUnitLoad);
   let sum = 0;
+  let sumOfSquares = 0;
   let peak = 0;
   for (let i = 0; i < loads.length; i++) {
     const x = loads[i]!;
     sum += x;
+    sumOfSquares += x * x;
     if (x > peak) peak = x;
   }
+  return { mean: sum / loads.length, meanSquare: sumOfSquares / loads.length, peak };
+}
+
+/** Load factor: mean load over peak load, for equal steps. */
+export function loadFactor(loads: Float64Array): number {
+  const { mean, peak } = loadStatistics(loads);
   if (peak === 0) throw new NoAnswerError('every load is zero: the load factor is undefined');
-  return sum / loads.length / peak;
+  return mean / peak;
 }
 
 /** Loss factor: mean of load² over peak load², for equal steps — the exact one from the profile. */
 export function lossFactor(loads: Float64Array): number {
-  eachOf('loads', nonEmpty('loads', loads), perUnitLoad);
-  let sum = 0;
-  let peak = 0;
-  for (let i = 0; i < loads.length; i++) {
-    const x = loads[i]!;
-    sum += x * x;
-    if (x > peak) peak = x;
-  }
+  const { meanSquare, peak } = loadStatistics(loads);
   if (peak === 0) throw new NoAnswerError('every load is zero: the loss factor is undefined');
-  return sum / loads.length / (peak * peak);
+  return meanSquare / (peak * peak);
 }
 
 /**

@@ -1,35 +1,40 @@
 /**
- * The two ways a computation can refuse, kept apart so the cell layer can map each to the Excel
- * error that fits (see DESIGN.md, "Spreadsheet conventions"):
+ * The ways a computation can refuse, kept apart so the cell layer can map each to the Excel
+ * error that fits:
  *  - InputError: the user gave an argument outside its domain -> #VALUE! with the message.
  *  - NoAnswerError: the inputs are valid but have no numeric answer -> #NUM!.
  *  - NotInTableError: a standard's table has no row for the input -> #N/A with the message.
  * A programmer mistake is an ordinary Error and is never caught as one of these.
+ *
+ * Every message about one argument reads `argument <name>: <reason>`, built by argumentMessage
+ * alone, so the core, the guards and the cell adapter word a fault the same way.
  */
-export class InputError extends Error {
+export function argumentMessage(name: string, reason: string): string {
+  return `argument ${name}: ${reason}`;
+}
+
+/** A refusal that names the argument at fault. */
+abstract class ArgumentFault extends Error {
   constructor(
     readonly argument: string,
     readonly reason: string,
   ) {
-    super(`argument ${argument}: ${reason}`);
-    this.name = 'InputError';
+    super(argumentMessage(argument, reason));
   }
+}
+
+export class InputError extends ArgumentFault {
+  override readonly name = 'InputError';
+}
+
+export class NotInTableError extends ArgumentFault {
+  override readonly name = 'NotInTableError';
 }
 
 export class NoAnswerError extends Error {
+  override readonly name = 'NoAnswerError';
   constructor(readonly reason: string) {
     super(reason);
-    this.name = 'NoAnswerError';
-  }
-}
-
-export class NotInTableError extends Error {
-  constructor(
-    readonly argument: string,
-    readonly reason: string,
-  ) {
-    super(`argument ${argument}: ${reason}`);
-    this.name = 'NotInTableError';
   }
 }
 

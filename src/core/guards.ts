@@ -7,7 +7,8 @@ import { InputError, shown } from './errors';
 
 // Each guard's passing path is one or two comparisons, small enough for the compiler to inline
 // into the hot loops of the core; the message is built only on refusal, out of line.
-function refuse(name: string, reason: string): never {
+/** Refuses an argument: every guard and every core check throws through here. */
+export function refuse(name: string, reason: string): never {
   throw new InputError(name, reason);
 }
 
@@ -39,7 +40,7 @@ export function nonNegative(name: string, value: number): number {
 /** A fraction from 0 to 1 inclusive (load factor, loss factor, a weighting). */
 export function atMostOne(name: string, value: number): number {
   finite(name, value);
-  if (!(value >= 0 && value <= 1)) throw new InputError(name, `must be from 0 to 1 (got ${shown(value)})`);
+  if (!(value >= 0 && value <= 1)) refuse(name, `must be from 0 to 1 (got ${shown(value)})`);
   return value;
 }
 
@@ -56,7 +57,7 @@ export function perUnitLoad(name: string, value: number): number {
 export function perUnitLoadAtMost(name: string, value: number, max: number): number {
   perUnitLoad(name, value);
   if (value > max) {
-    throw new InputError(name, `${shown(value)} per unit is above ${shown(max)}, beyond the model's range; give the load as kVA ÷ nameplate kVA (1 = full load)`);
+    refuse(name, `${shown(value)} per unit is above ${shown(max)}, beyond the model's range; give the load as kVA ÷ nameplate kVA (1 = full load)`);
   }
   return value;
 }
@@ -75,9 +76,9 @@ export function powerFactor(name: string, value: number): number {
 export function perUnitImpedance(name: string, value: number): number {
   finite(name, value);
   if (value >= 1) {
-    throw new InputError(name, `${shown(value)} is 100 % or more; type it as a percentage, e.g. ${shown(value)}% or ${shown(value / 100)}`);
+    refuse(name, `${shown(value)} is 100 % or more; type it as a percentage, e.g. ${shown(value)}% or ${shown(value / 100)}`);
   }
-  if (!(value > 0)) throw new InputError(name, `must be greater than 0 % (got ${shown(value)})`);
+  if (!(value > 0)) refuse(name, `must be greater than 0 % (got ${shown(value)})`);
   return value;
 }
 
@@ -85,10 +86,10 @@ export function perUnitImpedance(name: string, value: number): number {
 export function fractionBelowOne(name: string, value: number, allowZero = true): number {
   finite(name, value);
   if (Math.abs(value) >= 1) {
-    throw new InputError(name, `${shown(value)} is 100 % or more; type it as a percentage, e.g. ${shown(value)}%`);
+    refuse(name, `${shown(value)} is 100 % or more; type it as a percentage, e.g. ${shown(value)}%`);
   }
   if (allowZero ? value < 0 : value <= 0) {
-    throw new InputError(name, `must be ${allowZero ? '0 or more' : 'greater than 0'} (got ${shown(value)})`);
+    refuse(name, `must be ${allowZero ? '0 or more' : 'greater than 0'} (got ${shown(value)})`);
   }
   return value;
 }
@@ -96,14 +97,14 @@ export function fractionBelowOne(name: string, value: number, allowZero = true):
 export function integerBetween(name: string, value: number, low: number, high: number): number {
   finite(name, value);
   if (!Number.isInteger(value) || value < low || value > high) {
-    throw new InputError(name, `must be a whole number from ${low} to ${high} (got ${shown(value)})`);
+    refuse(name, `must be a whole number from ${low} to ${high} (got ${shown(value)})`);
   }
   return value;
 }
 
 export function phaseCount(name: string, value: number): 1 | 3 {
   finite(name, value);
-  if (value !== 1 && value !== 3) throw new InputError(name, `must be 1 or 3 phases (got ${shown(value)})`);
+  if (value !== 1 && value !== 3) refuse(name, `must be 1 or 3 phases (got ${shown(value)})`);
   return value;
 }
 
@@ -113,7 +114,7 @@ export function eachOf(name: string, values: Float64Array, check: (n: string, v:
     try {
       check(name, values[i]!);
     } catch (error) {
-      if (error instanceof InputError) throw new InputError(`${name} (step ${i + 1})`, error.reason);
+      if (error instanceof InputError) refuse(`${name} (step ${i + 1})`, error.reason);
       throw error;
     }
   }
@@ -123,13 +124,13 @@ export function eachOf(name: string, values: Float64Array, check: (n: string, v:
 /** A series given as one value (held constant) or as one value per step of the profile. */
 export function oneOrSameLength(name: string, values: Float64Array, steps: number, profileName: string): Float64Array {
   if (values.length !== 1 && values.length !== steps) {
-    throw new InputError(name, `has ${values.length} values; give one value or one per step of ${profileName} (${steps})`);
+    refuse(name, `has ${values.length} values; give one value or one per step of ${profileName} (${steps})`);
   }
   return values;
 }
 
 export function nonEmpty(name: string, values: Float64Array): Float64Array {
-  if (values.length === 0) throw new InputError(name, 'is empty; give at least one value');
+  if (values.length === 0) refuse(name, 'is empty; give at least one value');
   return values;
 }
 
@@ -137,29 +138,45 @@ export function nonEmpty(name: string, values: Float64Array): Float64Array {
 export function positiveAtMost(name: string, value: number, max: number): number {
   finite(name, value);
   if (!(value > 0 && value <= max)) {
-    throw new InputError(name, `must be greater than 0 and at most ${shown(max)} (got ${shown(value)})`);
+    refuse(name, `must be greater than 0 and at most ${shown(max)} (got ${shown(value)})`);
   }
   return value;
 }
 
+/** How option text is compared: case, surrounding blanks and the separator (blank, _ or -) do not matter. */
+function optionKey(text: string): string {
+  return String(text).trim().toLowerCase().replace(/[\s_-]+/g, '-');
+}
+
 /**
- * One of a fixed set of text options, matched case-insensitively and ignoring surrounding blanks.
- * Returns the option as the set spells it, so callers compare against one spelling only.
+ * A matcher for a fixed set of text options, built once: it returns the option as the set spells
+ * it, so callers compare against one spelling only, or undefined. `aliases` maps other accepted
+ * spellings (a short form, the other standard's name) to an option.
  */
-export function oneOf<T extends string>(name: string, text: string, options: readonly T[]): T {
-  const t = String(text).trim().toLowerCase();
-  const hit = options.find((o) => o.toLowerCase() === t);
-  if (hit === undefined) {
-    throw new InputError(name, `"${String(text)}" is not one of ${options.map((o) => `"${o}"`).join(', ')}`);
-  }
-  return hit;
+export function optionMatcher<T extends string>(options: readonly T[], aliases: Readonly<Record<string, T>> = {}): (text: string) => T | undefined {
+  const byKey = new Map<string, T>();
+  for (const [alias, option] of Object.entries(aliases)) byKey.set(optionKey(alias), option);
+  for (const option of options) byKey.set(optionKey(option), option);
+  return (text) => byKey.get(optionKey(text));
+}
+
+/** The reason text is refused: `"xyz" is not one of "ONAN", "ONAF", "OF", "OD" or "OFAF", "ODAF"`. */
+export function notAnOption(text: string, options: readonly string[], aliases: Readonly<Record<string, string>> = {}): string {
+  const quoted = (list: readonly string[]) => list.map((o) => `"${o}"`).join(', ');
+  const others = Object.keys(aliases);
+  return `"${String(text)}" is not one of ${quoted(options)}${others.length === 0 ? '' : ` or ${quoted(others)}`}`;
+}
+
+/** One of a fixed set of text options (see optionMatcher); anything else is refused. */
+export function oneOf<T extends string>(name: string, text: string, options: readonly T[], aliases: Readonly<Record<string, T>> = {}): T {
+  return optionMatcher(options, aliases)(text) ?? refuse(name, notAnOption(text, options, aliases));
 }
 
 /** A number from low to high inclusive; `what` names the quantity in the message ("an ambient temperature"). */
 export function within(name: string, value: number, low: number, high: number, unit: string, what = 'the value'): number {
   finite(name, value);
   if (!(value >= low && value <= high)) {
-    throw new InputError(name, `${shown(value)} ${unit} is out of range; ${what} must be from ${shown(low)} to ${shown(high)} ${unit}`);
+    refuse(name, `${shown(value)} ${unit} is out of range; ${what} must be from ${shown(low)} to ${shown(high)} ${unit}`);
   }
   return value;
 }

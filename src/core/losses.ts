@@ -27,19 +27,6 @@ export function temperatureConstant(material: ConductorMaterial, standard: LossS
   return standard === 'IEC' ? 235 : 234.5;
 }
 
-export function parseMaterial(text: string): ConductorMaterial {
-  const t = String(text).trim().toLowerCase();
-  if (t === 'cu' || t === 'copper') return 'Cu';
-  if (t === 'al' || t === 'aluminum' || t === 'aluminium') return 'Al';
-  throw new InputError('material', `"${text}" is not a conductor material; use "Cu" or "Al"`);
-}
-
-export function parseLossStandard(text: string): LossStandard {
-  const t = String(text).trim().toUpperCase();
-  if (t === 'IEEE' || t === 'IEC') return t;
-  throw new InputError('standard', `"${text}" is not a supported standard here; use "IEEE" or "IEC"`);
-}
-
 /**
  * Load loss measured at `fromC` moved to `toC` (IEEE C57.12.90 load-loss clause; IEC 60076-1
  * clause 11.4, both from memory): the I²R part grows with resistance, f = (Tk + to)/(Tk + from);

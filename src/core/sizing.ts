@@ -3,7 +3,7 @@
  * source of every row; a load beyond the largest rating of a series has no row (#N/A).
  */
 import { InputError, NoAnswerError, NotInTableError, shown } from './errors';
-import { anyNumber, fractionBelowOne, oneOf, positive } from './guards';
+import { anyNumber, fractionBelowOne, positive } from './guards';
 
 export type RatingSeriesId = 'US1' | 'US3' | 'IEC';
 
@@ -83,15 +83,11 @@ export const RATING_SERIES: Readonly<Record<RatingSeriesId, RatingSeries>> = {
   },
 };
 
-export function parseRatingSeries(text: string): RatingSeries {
-  return RATING_SERIES[oneOf('series', text, ['US1', 'US3', 'IEC'] as const)];
-}
-
 /** The smallest standard rating of the series that carries load × (1 + margin). */
-export function nextStandardRating(loadKva: number, margin: number, seriesText: string): number {
+export function nextStandardRating(loadKva: number, margin: number, seriesId: RatingSeriesId): number {
   const load = positive('load_kva', loadKva);
   const m = fractionBelowOne('margin', margin);
-  const series = parseRatingSeries(seriesText);
+  const series = RATING_SERIES[seriesId];
   const needed = load * (1 + m);
   // A rating equal to the need is enough; the tolerance absorbs rounding in load × (1 + margin).
   const rating = series.ratingsKva.find((r) => r >= needed * (1 - 1e-12));

@@ -34,15 +34,12 @@ import {
   type SimpleCellAddress,
 } from 'hyperformula';
 import { adapt, type CellFunction, type ErrorKind } from '../cells/adapter';
-import { catalog, NAMESPACE } from '../cells/catalog';
+import { catalog, formulaName } from '../cells/catalog';
 import type { CellFunctionDecl } from '../cells/declaration';
 
 const ERROR_TYPE: Record<ErrorKind, ErrorType> = { VALUE: ErrorType.VALUE, NUM: ErrorType.NUM, NA: ErrorType.NA };
 
 export const hyperFormulaError = (kind: ErrorKind, message: string): CellError => new CellError(ERROR_TYPE[kind], message);
-
-/** The name a declaration has in formulas: XFMR.EFF. */
-export const formulaName = (decl: CellFunctionDecl): string => `${NAMESPACE}.${decl.name}`;
 
 /**
  * What one calculation wants to hear from the functions while HyperFormula runs them. HyperFormula

@@ -14,7 +14,7 @@
  * is (the engine shows #NAME? for it) so nothing in a formula is lost. Text inside string
  * literals and quoted sheet names is never touched.
  */
-import { catalog, NAMESPACE } from '../cells/catalog';
+import { catalog, formulaName, NAMESPACE } from '../cells/catalog';
 
 /** `_xldudf_XFMR_EFF` for XFMR.EFF (dots of a name become underscores too). */
 export function storedName(name: string): string {
@@ -24,8 +24,8 @@ export function storedName(name: string): string {
 const byStoredName = new Map<string, string>();
 const byFormulaName = new Map<string, string>();
 for (const decl of catalog) {
-  byStoredName.set(storedName(decl.name).toUpperCase(), `${NAMESPACE}.${decl.name}`);
-  byFormulaName.set(`${NAMESPACE}.${decl.name}`, storedName(decl.name));
+  byStoredName.set(storedName(decl.name).toUpperCase(), formulaName(decl));
+  byFormulaName.set(formulaName(decl), storedName(decl.name));
 }
 
 /** Runs `edit` on the parts of a formula outside "string literals" and 'quoted sheet names'. */
@@ -74,7 +74,7 @@ const PLAIN_CALL = new RegExp(`(?<![\\w.])${NAMESPACE}\\.([A-Za-z0-9_.]+)(?=\\s*
  */
 function unknownOfOurs(rest: string): string | undefined {
   const prefix = `${NAMESPACE}_`;
-  return rest.toUpperCase().startsWith(prefix) && rest.length > prefix.length ? `${NAMESPACE}.${rest.slice(prefix.length).toUpperCase()}` : undefined;
+  return rest.toUpperCase().startsWith(prefix) && rest.length > prefix.length ? formulaName(rest.slice(prefix.length).toUpperCase()) : undefined;
 }
 
 /** The formula as the engine reads it: our stored names back to XFMR.NAME, `_xlfn.` dropped. */
@@ -83,14 +83,14 @@ export function toEngineFormula(stored: string): string {
     code
       .replace(STORED_CALL, (whole, rest: string) => byStoredName.get(`_XLDUDF_${rest.toUpperCase()}`) ?? unknownOfOurs(rest) ?? whole)
       .replace(FUTURE_PREFIX, '')
-      .replace(PLAIN_CALL, (whole, rest: string) => (byFormulaName.has(`${NAMESPACE}.${rest.toUpperCase()}`) ? `${NAMESPACE}.${rest.toUpperCase()}` : whole)),
+      .replace(PLAIN_CALL, (whole, rest: string) => (byFormulaName.has(formulaName(rest.toUpperCase())) ? formulaName(rest.toUpperCase()) : whole)),
   );
 }
 
 /** The formula as Excel stores it: calls to our functions under their `_xldudf_` names. */
 export function toStoredFormula(formula: string): string {
   return outsideQuotes(formula, (code) =>
-    code.replace(PLAIN_CALL, (whole, rest: string) => byFormulaName.get(`${NAMESPACE}.${rest.toUpperCase()}`) ?? whole),
+    code.replace(PLAIN_CALL, (whole, rest: string) => byFormulaName.get(formulaName(rest.toUpperCase())) ?? whole),
   );
 }
 
@@ -99,7 +99,7 @@ export function callsOurFunctions(formula: string): boolean {
   let found = false;
   outsideQuotes(formula, (code) => {
     if (!found) {
-      for (const m of code.matchAll(PLAIN_CALL)) if (byFormulaName.has(`${NAMESPACE}.${m[1]!.toUpperCase()}`)) found = true;
+      for (const m of code.matchAll(PLAIN_CALL)) if (byFormulaName.has(formulaName(m[1]!.toUpperCase()))) found = true;
       for (const m of code.matchAll(STORED_CALL)) if (byStoredName.has(`_XLDUDF_${m[1]!.toUpperCase()}`)) found = true;
     }
     return code;

@@ -1,9 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { adapt, CellError, plainErrors } from '../../src/cells/adapter';
-import { catalog, findFunction } from '../../src/cells/catalog';
+import { catalog } from '../../src/cells/catalog';
 import { efficiencyAt } from '../../src/core/efficiency';
+import { cellFunction } from '../support/cells';
 
-const cell = (name: string) => adapt(findFunction(name)!, plainErrors);
+const cell = cellFunction;
 const EFF = cell('EFF');
 
 function asError(v: unknown): CellError {

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { adapt, CellError, plainErrors } from '../../src/cells/adapter';
 import { findFunction } from '../../src/cells/catalog';
+import { column, errorOf } from '../support/cells';
 import { AGERATE, FAA, FEQA, HOTSPOT, HOTSPOTS, LIFEUSED, MAXLOAD } from '../../src/cells/functions/thermal';
 
 const hotspot = adapt(HOTSPOT, plainErrors);
@@ -10,14 +11,6 @@ const hotspots = adapt(HOTSPOTS, plainErrors);
 const feqa = adapt(FEQA, plainErrors);
 const lifeused = adapt(LIFEUSED, plainErrors);
 const maxload = adapt(MAXLOAD, plainErrors);
-
-const column = (values: readonly number[]) => values.map((v) => [v]);
-
-function errorOf(result: unknown[][]): CellError {
-  const cell = result[0]![0];
-  expect(cell).toBeInstanceOf(CellError);
-  return cell as CellError;
-}
 
 describe('catalog', () => {
   it('holds the seven loading-and-aging functions with the design names and argument order', () => {

@@ -9,16 +9,28 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { adapt, plainErrors } from '../../src/cells/adapter';
-import { findFunction } from '../../src/cells/catalog';
 import ExcelJS from 'exceljs';
-import { BID_CELLS, EVALUATION, OFFER_COLUMNS, OFFER_ROW, OFFERS } from '../../src/cli/bids';
 import { BIDS_FILE, demo, FLEET_FILE, formatDemoSummary, YEAR_FILE, type DemoSummary } from '../../src/cli/demo';
-import { FLEET, FLEET_COLUMNS, HOURS, PROFILE_COLUMNS, YEAR_CELLS, YEAR_UNIT, yearOfAmbients, yearOfLoads } from '../../src/cli/fernhill';
+import {
+  BID_CELLS,
+  EVALUATION,
+  FLEET,
+  FLEET_COLUMNS,
+  HOURS,
+  OFFER_COLUMNS,
+  OFFER_ROW,
+  OFFERS,
+  PROFILE_COLUMNS,
+  YEAR_CELLS,
+  YEAR_UNIT,
+  yearOfAmbients,
+  yearOfLoads,
+} from '../../src/demo';
 import { loadLossWorth, noLoadLossWorth, totalOwningCost } from '../../src/core/cost';
 import { doeMinimumEfficiency, meetsEfficiencyRule } from '../../src/core/efficiencyRules';
 import { loadingYear, maxLoadForHotSpot } from '../../src/core/thermal';
 import { loadWorkbook, recalculate, type FormulaResult } from '../../src/engine/xlsx';
+import { xfmr } from '../support/cells';
 import { fluxbook } from './run';
 
 let dir: string;
@@ -33,15 +45,13 @@ afterAll(() => {
   execFileSync('rm', ['-rf', dir]);
 });
 
-const call = (name: string, ...args: unknown[]) => adapt(findFunction(name)!, plainErrors)(...args)[0]![0];
-
 describe('the Fernhill Works demo', () => {
   it('has 14 units of 500–2500 kVA whose efficiency at half load is that of efficient units', () => {
     expect(FLEET).toHaveLength(14);
     for (const u of FLEET) {
       expect(u.kva).toBeGreaterThanOrEqual(500);
       expect(u.kva).toBeLessThanOrEqual(2500);
-      const eff = call('EFF', u.kva, u.p0W, u.pkW, 0.5) as number;
+      const eff = xfmr('EFF', u.kva, u.p0W, u.pkW, 0.5) as number;
       // common practice: modern liquid-filled distribution units run about 99.0–99.6 % at half load
       expect(eff).toBeGreaterThan(0.99);
       expect(eff).toBeLessThan(0.996);
@@ -91,13 +101,13 @@ describe('the Fernhill Works demo', () => {
   });
 
   it('summarises the ratio failures, the worst unit at half load, and the year', () => {
-    const failing = FLEET.filter((u) => !(call('RATIOOK', (call('RATIO', u.hvV, u.lvV, u.vectorGroup) as number) * (1 + u.ratioOffset), u.hvV, u.lvV, u.vectorGroup) as boolean));
+    const failing = FLEET.filter((u) => !(xfmr('RATIOOK', (xfmr('RATIO', u.hvV, u.lvV, u.vectorGroup) as number) * (1 + u.ratioOffset), u.hvV, u.lvV, u.vectorGroup) as boolean));
     expect(summary.ratioFailures.map((f) => f.id)).toEqual(failing.map((u) => u.id));
     expect(summary.ratioFailures.map((f) => f.id)).toEqual(['FH-04', 'FH-10']);
-    const worst = FLEET.reduce((w, u) => ((call('EFF', u.kva, u.p0W, u.pkW, 0.5) as number) < (call('EFF', w.kva, w.p0W, w.pkW, 0.5) as number) ? u : w));
+    const worst = FLEET.reduce((w, u) => ((xfmr('EFF', u.kva, u.p0W, u.pkW, 0.5) as number) < (xfmr('EFF', w.kva, w.p0W, w.pkW, 0.5) as number) ? u : w));
     expect(summary.worstEfficiency.id).toBe(worst.id);
     const loads = Array.from(yearOfLoads(), (x) => [x]);
-    expect(summary.energyLostKwh).toBeCloseTo(call('ELOSS', YEAR_UNIT.p0W, YEAR_UNIT.pkW, loads) as number, 6);
+    expect(summary.energyLostKwh).toBeCloseTo(xfmr('ELOSS', YEAR_UNIT.p0W, YEAR_UNIT.pkW, loads) as number, 6);
     const text = formatDemoSummary(summary);
     expect(text).toMatch(/2 of 14 units fail/);
     expect(text).toMatch(/FH-04/);

@@ -35,3 +35,16 @@ describe('efficiency', () => {
     expect(pei).toBeCloseTo(1 - 2000 / (1e6 * x), 12);
   });
 });
+
+describe('efficiencyCurve agrees with efficiencyAt', () => {
+  it('every row is the efficiency and the losses at its load', () => {
+    for (const [x, eta, losses] of efficiencyCurve(1000, 1400, 10500, 0.9, 11, 1.25)) {
+      expect(eta).toBe(efficiencyAt(1000, 1400, 10500, x!, 0.9));
+      expect(losses).toBe(1400 + x! * x! * 10500);
+    }
+  });
+  it('with no core loss the zero-load row has no answer, as efficiencyAt refuses it', () => {
+    expect(() => efficiencyAt(1000, 0, 10500, 0, 1)).toThrow(NoAnswerError);
+    expect(efficiencyCurve(1000, 0, 10500, 1, 3, 1)[0]![1]).toBeNaN();
+  });
+});

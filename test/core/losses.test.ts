@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { loadLossAt, loadLossAtTemperature, parseMaterial, totalLossesAt } from '../../src/core/losses';
+import { loadLossAt, loadLossAtTemperature, totalLossesAt } from '../../src/core/losses';
 
 describe('losses', () => {
   it('load loss scales with load squared; total adds no-load loss', () => {
@@ -21,10 +21,5 @@ describe('losses', () => {
   });
   it('refuses an I²R part larger than the whole', () => {
     expect(() => loadLossAtTemperature(10000, 25, 85, 12000, 'Cu', 'IEEE')).toThrow(/i2r_w/);
-  });
-  it('reads materials case-insensitively and refuses others', () => {
-    expect(parseMaterial('cu')).toBe('Cu');
-    expect(parseMaterial('Aluminium')).toBe('Al');
-    expect(() => parseMaterial('Fe')).toThrow(/material/);
   });
 });

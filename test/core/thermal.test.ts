@@ -15,9 +15,6 @@ import {
   loadingYear,
   maxLoadForHotSpot,
   maxSteadyLoad,
-  parseCooling,
-  parsePaper,
-  parseThermalMethod,
   relativeAgingRate,
   steadyHotSpot,
   THERMAL_ROWS,
@@ -40,30 +37,11 @@ function argumentOf(fn: () => unknown): string {
 }
 
 describe('choosing the table row', () => {
-  it('reads cooling names case-insensitively, with IEEE and IEC spellings', () => {
-    expect(parseCooling(' onan ')).toBe('ONAN');
-    expect(parseCooling('Onaf')).toBe('ONAF');
-    expect(parseCooling('OFAF')).toBe('OF');
-    expect(parseCooling('of')).toBe('OF');
-    expect(parseCooling('ODAF')).toBe('OD');
-    expect(parseCooling('od')).toBe('OD');
-  });
-
-  it('refuses an unknown cooling, naming cooling', () => {
-    expect(argumentOf(() => parseCooling('AN'))).toBe('cooling');
-  });
-
-  it('reads the method, refusing others by name', () => {
-    expect(parseThermalMethod('ieee')).toBe('IEEE');
-    expect(parseThermalMethod('iec power')).toBe('IEC-POWER');
-    expect(argumentOf(() => parseThermalMethod('ANSI'))).toBe('method');
-  });
-
   it('takes the IEC distribution row for IEC ONAN and the power rows otherwise', () => {
     expect(thermalModel('ONAN', 'IEC', undefined, undefined, undefined)).toBe(IEC_DISTRIBUTION_ONAN);
     expect(thermalModel('ONAN', 'IEC-POWER', undefined, undefined, undefined)).toBe(IEC_POWER.ONAN);
     expect(thermalModel('ONAF', 'IEC', undefined, undefined, undefined)).toBe(IEC_POWER.ONAF);
-    expect(thermalModel('ODAF', 'IEEE', undefined, undefined, undefined)).toBe(IEEE_ROWS.OD);
+    expect(thermalModel('OD', 'IEEE', undefined, undefined, undefined)).toBe(IEEE_ROWS.OD);
   });
 
   it("replaces the rated values with the unit's own and checks them by name", () => {
@@ -208,10 +186,7 @@ describe('profiles: checks, aging and life', () => {
     expect(lifeUsedHours(loads, one(25), 2, 'ONAF', ...none, 'IEEE', 'upgraded')).toBeCloseTo(mean * 8, 12);
   });
 
-  it('reads the paper kind and refuses others by name', () => {
-    expect(parsePaper('Thermally upgraded')).toBe('upgraded');
-    expect(parsePaper('KRAFT')).toBe('normal');
-    expect(argumentOf(() => parsePaper('linen'))).toBe('paper');
+  it('refuses a hot-spot outside the aging laws, by name', () => {
     expect(relativeAgingRate(110, 'upgraded')).toBe(1);
     expect(argumentOf(() => agingAccelerationFactor(400))).toBe('hotspot_c');
   });

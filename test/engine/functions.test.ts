@@ -6,8 +6,9 @@
 import { DetailedCellError, type RawCellContent } from 'hyperformula';
 import { describe, expect, it } from 'vitest';
 import { adapt, CellError, plainErrors } from '../../src/cells/adapter';
-import { catalog, findFunction } from '../../src/cells/catalog';
+import { catalog } from '../../src/cells/catalog';
 import { evaluateFormula } from '../../src/engine/engine';
+import { xfmrRange } from '../support/cells';
 
 type Plain = number | string | boolean | null | { kind: string; message: string };
 
@@ -38,7 +39,7 @@ function expectSame(actual: Plain[][], expected: Plain[][]): void {
 }
 
 function adapterResult(name: string, ...args: unknown[]): Plain[][] {
-  return adapt(findFunction(name)!, plainErrors)(...args).map((r) => r.map(plain));
+  return xfmrRange(name, ...args).map((r) => r.map(plain));
 }
 
 describe('the catalog in HyperFormula', () => {

@@ -4,13 +4,12 @@
  */
 import ExcelJS from 'exceljs';
 import { describe, expect, it } from 'vitest';
-import { adapt, plainErrors } from '../../src/cells/adapter';
-import { findFunction } from '../../src/cells/catalog';
 import { loadWorkbook, recalculate, WorkbookError } from '../../src/engine/xlsx';
+import { xfmr, xfmrRange } from '../support/cells';
 import { fml, handMadeXlsx, num, partText, row, str } from './ooxml';
 
-const eff = (...args: unknown[]) => adapt(findFunction('EFF')!, plainErrors)(...args)[0]![0] as number;
-const curve = (...args: unknown[]) => adapt(findFunction('EFFCURVE')!, plainErrors)(...args) as number[][];
+const eff = (...args: unknown[]) => xfmr('EFF', ...args) as number;
+const curve = (...args: unknown[]) => xfmrRange('EFFCURVE', ...args) as number[][];
 
 async function save(wb: ExcelJS.Workbook): Promise<Buffer> {
   return Buffer.from(await wb.xlsx.writeBuffer());

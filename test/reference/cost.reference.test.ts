@@ -5,7 +5,6 @@
 import * as formulajs from '@formulajs/formulajs';
 import { describe, expect, it } from 'vitest';
 import { loadLossWorth, noLoadLossWorth, presentWorthFactor } from '../../src/core/cost';
-import { yearsToLimit } from '../../src/core/sizing';
 
 describe('present-worth factor = −PV(rate, years, 1) of @formulajs/formulajs', () => {
   const cases: [number, number][] = [
@@ -52,20 +51,5 @@ describe('demand charge and responsibility factor in A and B (IEEE C57.120 loss 
   });
   it('without a demand charge A and B are the energy terms alone', () => {
     expect(loadLossWorth(0.1, 0.3, 0.8, 0.07, 20, 8760, 0, 0.5)).toBeCloseTo(loadLossWorth(0.1, 0.3, 0.8, 0.07, 20, 8760), 12);
-  });
-});
-
-describe('years until a growing peak reaches a limit = NPER of @formulajs/formulajs', () => {
-  it.each([
-    [820, 0.03, 1000],
-    [500, 0.05, 750],
-    [1900, 0.012, 2500],
-  ])('peak %s kVA growing %s a year to %s kVA', (peak, growth, limit) => {
-    // Source: @formulajs/formulajs NPER(rate, 0, −pv, fv): periods for −pv to grow to fv.
-    expect(yearsToLimit(peak, growth, limit)).toBeCloseTo(formulajs.NPER(growth, 0, -peak, limit) as number, 10);
-  });
-  it('0 when already at the limit; no answer when the peak does not grow', () => {
-    expect(yearsToLimit(1000, 0.03, 1000)).toBe(0);
-    expect(() => yearsToLimit(800, 0, 1000)).toThrow(/never reaches/);
   });
 });

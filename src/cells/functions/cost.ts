@@ -1,13 +1,12 @@
 import { loadLossWorth, lossEnergyCost, noLoadLossWorth, totalOwningCost } from '../../core/cost';
-import { each, num, series } from '../declaration';
+import { loads, p0, pk, stepHours } from '../arguments';
+import { each, num } from '../declaration';
 
 const GROUP = 'Cost';
 const price = num('price_kwh', 'money/kWh', 'Price of a kWh of energy lost, in your currency.', 0.12);
 const rate = num('rate', 'fraction', 'Interest (discount) rate a year, e.g. 6%; 0 for no discounting. No default: it is your evaluation policy.', 0.06);
 const years = num('years', 'years', 'Evaluation period, a whole number of years from 1 to 100. No default: it is your evaluation policy.', 25);
 const hoursAYear = num('hours', 'h', 'Hours energised a year, up to 8,784.', 8760, { default: 8760 });
-const p0 = num('p0_w', 'W', 'No-load loss (test report or offer).', 1100);
-const pk = num('pk_w', 'W', 'Load loss at rated current (test report or offer).', 9000);
 const demand = num('demand_kw_year', 'money/kW·year', 'Demand (capacity) charge for each kW of peak a year; blank or 0 for energy only.', 60, { default: 0 });
 
 export const AFACTOR = each({
@@ -65,9 +64,9 @@ export const LOSSCOST = each({
   args: [
     p0,
     pk,
-    series('loads', 'per unit', 'Loading profile: one per-unit load (kVA / nameplate kVA) per step, e.g. 8,760 hourly values.', [0.3, 0.5, 0.8, 0.6]),
+    loads,
     price,
-    series('hours', 'h', 'Length of each step: one value for every step or one per step.', [6], { default: 1 }),
+    stepHours,
   ],
   result: { type: 'number', unit: 'money' },
   compute: lossEnergyCost,

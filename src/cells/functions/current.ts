@@ -1,11 +1,8 @@
-import { apparentPowerKva, faultCurrent, ratedCurrent, windingCurrent } from '../../core/current';
-import { oneOf } from '../../core/guards';
-import { each, num, text } from '../declaration';
+import { apparentPowerKva, faultCurrent, ratedCurrent, windingCurrent, type WindingSide } from '../../core/current';
+import { blankable, impedance, kva, phases, volts } from '../arguments';
+import { choice, each, num, text } from '../declaration';
 
 const GROUP = 'Current and power';
-const kva = num('kva', 'kVA', 'Nameplate rating.', 1000);
-const volts = num('v', 'V', 'Voltage, line-to-line for three-phase.', 480);
-const phases = num('phases', 'phases', '1 or 3.', 3, { default: 3 });
 
 export const IRATED = each({
   name: 'IRATED',
@@ -27,13 +24,15 @@ export const IWINDING = each({
     volts,
     text('vector_letter', 'Connection of the winding v belongs to: D, Y, YN, Z or ZN (either case); or a vector group such as Dyn11 together with side.', 'D'),
     phases,
-    text('side', '"HV" or "LV": the winding of the vector group that v belongs to; needed only when vector_letter is a whole vector group.', 'LV', {
-      optional: true,
-    }),
+    blankable(
+      choice('side', '"HV" or "LV": the winding of the vector group that v belongs to; needed only when vector_letter is a whole vector group.', {
+        options: ['HV', 'LV'] as const satisfies readonly WindingSide[],
+        aliases: { high: 'HV', low: 'LV', primary: 'HV', secondary: 'LV' },
+      }),
+    ),
   ],
   result: { type: 'number', unit: 'A' },
-  compute: (k: number, v: number, letter: string, p: number, side: string | undefined) =>
-    windingCurrent(k, v, letter, p, side === undefined ? undefined : oneOf('side', side, ['HV', 'LV'] as const)),
+  compute: windingCurrent,
 });
 
 export const KVA = each({
@@ -54,7 +53,7 @@ export const ISC = each({
   args: [
     kva,
     volts,
-    num('z', 'fraction', 'Impedance as a percentage of the rating, e.g. 5.75%.', 0.0575),
+    impedance,
     num('source_mva', 'MVA', 'Short-circuit power of the supply; blank for an infinite source.', 500, { optional: true }),
     phases,
   ],

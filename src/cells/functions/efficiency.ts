@@ -1,18 +1,15 @@
 import { efficiencyAt, efficiencyCurve, maxEfficiency, maxEfficiencyLoad, peakEfficiencyIndex } from '../../core/efficiency';
+import { kva, load, p0, pf, pk } from '../arguments';
 import { block, each, num } from '../declaration';
 
 const GROUP = 'Efficiency';
-const kva = num('kva', 'kVA', 'Nameplate rating.', 1000);
-const p0 = num('p0_w', 'W', 'No-load (core) loss (test report).', 1400);
-const pk = num('pk_w', 'W', 'Load loss at rated current, at reference temperature (test report).', 10500);
-const pf = num('pf', 'power factor', 'Load power factor, 0 to 1.', 1, { default: 1 });
 
 export const EFF = each({
   name: 'EFF',
   group: GROUP,
   help: 'Efficiency at a per-unit load and power factor: output / (output + p0_w + pk_w × load²).',
   source: 'η = P_out / (P_out + P0 + x²·Pk) (textbook standard)',
-  args: [kva, p0, pk, num('load', 'per unit', 'Load as a fraction of nameplate kVA; 1 = full load.', 0.5), pf],
+  args: [kva, p0, pk, load, pf],
   result: { type: 'number', unit: 'fraction' },
   compute: efficiencyAt,
 });

@@ -1,15 +1,9 @@
 import { allDayEfficiency, energyDelivered, energyLost, loadFactor, lossFactor, lossFactorEstimate } from '../../core/energy';
+import { kva, loads, p0, pk, stepHours as hours } from '../arguments';
 import { each, num, series } from '../declaration';
 
 const GROUP = 'All-day energy';
-const kva = num('kva', 'kVA', 'Nameplate rating.', 1000);
-const p0 = num('p0_w', 'W', 'No-load (core) loss.', 1400);
-const pk = num('pk_w', 'W', 'Load loss at rated current.', 10500);
-const loads = series('loads', 'per unit', 'Loading profile: one per-unit load (kVA / nameplate kVA) per step, e.g. 8,760 hourly values.', [
-  0.3, 0.35, 0.6, 0.9, 1.0, 0.7,
-]);
 const pfs = series('pfs', 'power factor', 'Power factor: one value for the whole profile or one per step.', [0.9], { default: 1 });
-const hours = series('hours', 'h', 'Length of each step: one value for every step or one per step.', [4], { default: 1 });
 
 export const ALLDAY = each({
   name: 'ALLDAY',

@@ -1,6 +1,5 @@
-import { harmonicDerating, harmonicLossFactor, kFactor } from '../../core/harmonics';
-import { oneOf } from '../../core/guards';
-import { each, num, series, text } from '../declaration';
+import { harmonicDerating, harmonicLossFactor, kFactor, type SpectrumBasis } from '../../core/harmonics';
+import { choice, each, num, series } from '../declaration';
 
 const GROUP = 'Losses';
 const orders = series('orders', 'order', 'Harmonic orders, 1 for the fundamental, e.g. 1, 5, 7, 11, 13.', [1, 5, 7, 11, 13]);
@@ -23,10 +22,13 @@ export const KFACTOR = each({
   args: [
     orders,
     series('currents', 'per unit', 'Current at each order: per unit of rated current (basis "rated"), or of the fundamental (basis "fundamental").', [0.96, 0.19, 0.13, 0.087, 0.074]),
-    text('basis', '"rated": currents per unit of rated current; "fundamental": per unit or per cent of the fundamental.', 'rated', { default: 'rated' }),
+    choice('basis', '"rated": currents per unit of rated current; "fundamental": per unit or per cent of the fundamental.', {
+      options: ['rated', 'fundamental'] as const satisfies readonly SpectrumBasis[],
+      default: 'rated',
+    }),
   ],
   result: { type: 'number', unit: 'factor' },
-  compute: (o: Float64Array, c: Float64Array, basis: string) => kFactor(o, c, oneOf('basis', basis, ['rated', 'fundamental'] as const)),
+  compute: kFactor,
 });
 
 export const HDERATE = each({

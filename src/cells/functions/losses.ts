@@ -1,9 +1,8 @@
-import { loadLossAt, loadLossAtTemperature, parseLossStandard, parseMaterial, totalLossesAt } from '../../core/losses';
-import { each, num, text } from '../declaration';
+import { loadLossAt, loadLossAtTemperature, totalLossesAt } from '../../core/losses';
+import { load, lossStandard, material, p0, pk } from '../arguments';
+import { each, num } from '../declaration';
 
 const GROUP = 'Losses';
-const pk = num('pk_w', 'W', 'Load loss at rated current (test report).', 10500);
-const load = num('load', 'per unit', 'Load as a fraction of nameplate kVA; 1 = full load, 50% = half load.', 0.5);
 
 export const LOADLOSS = each({
   name: 'LOADLOSS',
@@ -20,7 +19,7 @@ export const LOSSES = each({
   group: GROUP,
   help: 'Total losses at a per-unit load: no-load loss + load loss × load².',
   source: 'common practice',
-  args: [num('p0_w', 'W', 'No-load (core) loss (test report).', 1400), pk, load],
+  args: [p0, pk, load],
   result: { type: 'number', unit: 'W' },
   compute: totalLossesAt,
 });
@@ -41,10 +40,9 @@ export const LOSSTEMP = each({
     num('i2r_w', 'W', 'The I²R part of pk_w at from_c (measured resistance × current²); needed when to_c is below from_c, blank otherwise treats all of pk_w as I²R.', 9000, {
       optional: true,
     }),
-    text('material', 'Winding conductor: "Cu" or "Al".', 'Cu', { default: 'Cu' }),
-    text('standard', '"IEEE" (copper Tk 234.5) or "IEC" (copper Tk 235); aluminium is 225 in both.', 'IEEE', { default: 'IEEE' }),
+    material,
+    lossStandard,
   ],
   result: { type: 'number', unit: 'W' },
-  compute: (pkW: number, from: number, to: number, i2r: number | undefined, material: string, standard: string) =>
-    loadLossAtTemperature(pkW, from, to, i2r, parseMaterial(material), parseLossStandard(standard)),
+  compute: loadLossAtTemperature,
 });

@@ -1,15 +1,15 @@
 import { baseImpedance, parallelShare, percentReactance, percentResistance, voltageRegulation } from '../../core/voltageRegulation';
+import { kva, pk, volts } from '../arguments';
 import { block, bool, each, num, series } from '../declaration';
 
 const GROUP = 'Regulation and impedance';
-const kva = num('kva', 'kVA', 'Nameplate rating.', 1000);
 
 export const RPCT = each({
   name: 'RPCT',
   group: GROUP,
   help: 'Per-unit resistance from the load loss: pk_w / (kva × 1000); shows as a percentage (%R = Pk / (10 × kVA)).',
   source: '%R = Pk / (10·kVA), Pk in W (common practice)',
-  args: [num('pk_w', 'W', 'Load loss at rated current, at reference temperature.', 10500), kva],
+  args: [pk, kva],
   result: { type: 'number', unit: 'fraction' },
   compute: percentResistance,
 });
@@ -48,7 +48,7 @@ export const ZBASE = each({
   group: GROUP,
   help: 'Base impedance in ohms: v² / (kva × 1000); multiply a per-unit impedance by it to get ohms.',
   source: 'Z_base = V² / S (common practice)',
-  args: [num('v', 'V', 'Voltage of the winding, line-to-line for three-phase.', 480), kva],
+  args: [volts, kva],
   result: { type: 'number', unit: 'Ω' },
   compute: baseImpedance,
 });

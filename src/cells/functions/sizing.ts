@@ -1,7 +1,7 @@
-import { altitudeDerating } from '../../core/altitude';
-import { oneOf } from '../../core/guards';
+import { altitudeDerating, type AltitudeCooling, type AltitudeQuantity, type AltitudeStandard } from '../../core/altitude';
 import { nextStandardRating, yearsToLimit } from '../../core/sizing';
-import { each, num, text } from '../declaration';
+import { blankable } from '../arguments';
+import { choice, each, num } from '../declaration';
 
 export const SIZE = each({
   name: 'SIZE',
@@ -11,7 +11,7 @@ export const SIZE = each({
   args: [
     num('load_kva', 'kVA', 'Load to carry, in kVA (kW / power factor).', 640),
     num('margin', 'fraction', 'Spare capacity to add, e.g. 20%; below 100 %.', 0.2, { default: 0 }),
-    text('series', 'Rating series: "US1", "US3" or "IEC".', 'US3', { default: 'US3' }),
+    choice('series', 'Rating series: "US1", "US3" or "IEC".', { options: ['US1', 'US3', 'IEC'], default: 'US3' }),
   ],
   result: { type: 'number', unit: 'kVA' },
   compute: nextStandardRating,
@@ -20,20 +20,27 @@ export const SIZE = each({
 export const ALTDERATE = each({
   name: 'ALTDERATE',
   group: 'Current and power',
-  help: 'Allowance for a site above 1,000 m. quantity "kva" (IEEE): the share of nameplate kVA the unit may carry, 1 − rate × (altitude − 1000)/100 with rate 0.4 % (ONAN), 0.5 % (ONAF, OFAF, ODAF), 0.3 % (dry AN), 0.5 % (dry AF). quantity "rise" (IEC 60076-2): kelvin to take off the temperature-rise limits, 1 K per started 400 m (ONAN) or 250 m (forced cooling). Planning estimate: to be verified by a qualified engineer; the manufacturer’s data govern.',
+  help: 'Allowance for a site above 1,000 m. quantity "kva" (IEEE, the default there): the share of nameplate kVA the unit may carry, 1 − rate × (altitude − 1000)/100 with rate 0.4 % (ONAN), 0.5 % (ONAF, OFAF, ODAF), 0.3 % (dry AN), 0.5 % (dry AF). quantity "rise" (IEC 60076-2, the default there): kelvin to take off the temperature-rise limits, 1 K per started 400 m (ONAN) or 250 m (forced cooling). Planning estimate: to be verified by a qualified engineer; the manufacturer’s data govern.',
   source: 'IEEE C57.12.00 / C57.91 altitude correction (liquid-immersed rates from memory; dry-type 0.3 % as stated by manufacturers’ FAQs); IEC 60076-2 reduced rise limits as quoted by a manufacturer’s FAQ',
   args: [
     num('altitude_m', 'm', 'Site altitude above sea level, in metres.', 2200),
-    text('cooling', '"ONAN", "ONAF", "OFAF", "ODAF" (liquid-immersed) or "AN", "AF" (dry-type).', 'ONAN', { default: 'ONAN' }),
-    text('standard', '"IEEE" (a kVA factor) or "IEC" (reduced rise limits).', 'IEEE', { default: 'IEEE' }),
-    text('quantity', '"kva" for the rating factor (IEEE) or "rise" for the reduction of the rise limits in K (IEC).', 'kva', { optional: true }),
+    choice('cooling', '"ONAN", "ONAF", "OFAF", "ODAF" (liquid-immersed) or "AN", "AF" (dry-type).', {
+      options: ['ONAN', 'ONAF', 'OFAF', 'ODAF', 'AN', 'AF'] as const satisfies readonly AltitudeCooling[],
+      aliases: { OF: 'OFAF', OD: 'ODAF' },
+      default: 'ONAN',
+    }),
+    choice('standard', '"IEEE" (a kVA factor) or "IEC" (reduced rise limits).', {
+      options: ['IEEE', 'IEC'] as const satisfies readonly AltitudeStandard[],
+      default: 'IEEE',
+    }),
+    blankable(
+      choice('quantity', '"kva" for the rating factor (IEEE) or "rise" for the reduction of the rise limits in K (IEC); blank takes the one the standard gives.', {
+        options: ['kva', 'rise'] as const satisfies readonly AltitudeQuantity[],
+      }),
+    ),
   ],
   result: { type: 'number', unit: 'per unit or K' },
-  compute: (h: number, cooling: string, standard: string, quantity: string | undefined) => {
-    const std = oneOf('standard', standard, ['IEEE', 'IEC'] as const);
-    const q = quantity === undefined ? (std === 'IEEE' ? 'kva' : 'rise') : oneOf('quantity', quantity, ['kva', 'rise'] as const);
-    return altitudeDerating(h, oneOf('cooling', cooling, ['ONAN', 'ONAF', 'OFAF', 'ODAF', 'AN', 'AF'] as const), std, q);
-  },
+  compute: (h, cooling, standard, quantity) => altitudeDerating(h, cooling, standard, quantity ?? (standard === 'IEEE' ? 'kva' : 'rise')),
 });
 
 export const YEARSTOLIMIT = each({

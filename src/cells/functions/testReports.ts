@@ -1,39 +1,27 @@
-import { InputError } from '../../core/errors';
-import { oneOf } from '../../core/guards';
-import { impedanceAtTemperature, parseLossStandard, parseMaterial, resistanceAtTemperature } from '../../core/losses';
+import { impedanceAtTemperature, resistanceAtTemperature } from '../../core/losses';
 import { peakShortCircuitCurrent, SHORT_CIRCUIT_LIMIT_C, shortCircuitTemperature } from '../../core/shortCircuit';
-import {
-  TEST_ITEM_ALIASES,
-  TEST_ITEMS,
-  toleranceLimit,
-  withinTolerance,
-  type TestItem,
-  type WindingArrangement,
-} from '../../core/testReport';
-import { each, num, text } from '../declaration';
+import { TEST_ITEM_ALIASES, TEST_ITEMS, toleranceLimit, withinTolerance, type TestStandard, type WindingArrangement } from '../../core/testReport';
+import { impedance, kva, lossStandard, material, phases, volts, withSample } from '../arguments';
+import { choice, each, num } from '../declaration';
 
 const GROUP = 'Test reports and short circuit';
 
-const ITEM_HELP =
-  'What is checked: "no-load loss" (p0), "load loss" (pk), "total loss" (total), "impedance" (z), "ratio" or "no-load current" (i0).';
-const item = text('item', ITEM_HELP, 'total loss');
-const standard = text('standard', '"IEC" (IEC 60076-1 Table 1) or "IEEE" (IEEE C57.12.00).', 'IEC', { default: 'IEC' });
+const item = choice(
+  'item',
+  'What is checked: "no-load loss" (p0), "load loss" (pk), "total loss" (total), "impedance" (z), "ratio" or "no-load current" (i0).',
+  { options: TEST_ITEMS, aliases: TEST_ITEM_ALIASES },
+);
+const standard = choice('standard', '"IEC" (IEC 60076-1 Table 1) or "IEEE" (IEEE C57.12.00).', {
+  options: ['IEC', 'IEEE'] as const satisfies readonly TestStandard[],
+  default: 'IEC',
+});
 const zForRatio = num('z', 'fraction', 'Measured impedance, e.g. 6%; needed for the IEC ratio tolerance (the lower of ±0.5 % and z / 10).', 0.06, {
   optional: true,
 });
-const windings = text('windings', '"two-winding" (default) or "other": three or more windings, a zigzag winding or an autotransformer.', 'two-winding', {
+const windings = choice('windings', '"two-winding" (default) or "other": three or more windings, a zigzag winding or an autotransformer.', {
+  options: ['two-winding', 'other'] as const satisfies readonly WindingArrangement[],
   default: 'two-winding',
 });
-
-function parseItem(textValue: string): TestItem {
-  const t = String(textValue).trim().toLowerCase();
-  const hit = TEST_ITEM_ALIASES[t] ?? TEST_ITEMS.find((o) => o === t);
-  if (hit !== undefined) return hit;
-  const names = TEST_ITEMS.map((o) => `"${o}"`).join(', ');
-  throw new InputError('item', `"${String(textValue)}" is not one of ${names} (or p0, pk, total, z, i0)`);
-}
-const parseStandard = (t: string) => oneOf('standard', t, ['IEC', 'IEEE'] as const);
-const parseWindings = (t: string): WindingArrangement => oneOf('windings', t, ['two-winding', 'other'] as const);
 
 export const TESTTOL = each({
   name: 'TESTTOL',
@@ -41,16 +29,15 @@ export const TESTTOL = each({
   help: 'Highest (bound "upper") or lowest ("lower") test result the standard accepts for a guarantee: losses +15 % each and +10 % total (IEC) or no-load +10 % and total +6 % (IEEE); impedance ±7.5 % / ±10 %; ratio the lower of ±0.5 % and z/10 (IEC) or ±0.5 % (IEEE); no-load current +30 % (IEC). #N/A where the standard sets no such limit.',
   source: 'IEC 60076-1 Table 1 (losses and ratio rows confirmed in a stored copy of the 1993+A1 edition; impedance and no-load current from memory); IEEE C57.12.00 tolerances (from memory; impedance row as quoted for IEEE dry-type units)',
   args: [
-    item,
+    withSample(item, 'total loss'),
     num('guaranteed', 'as the item', 'Guaranteed (declared) value: W for losses, a fraction for impedance and no-load current (e.g. 6%), the ratio itself for ratio.', 12000),
     standard,
-    text('bound', '"upper" for the highest accepted result, "lower" for the lowest.', 'upper', { default: 'upper' }),
+    choice('bound', '"upper" for the highest accepted result, "lower" for the lowest.', { options: ['upper', 'lower'], default: 'upper' }),
     zForRatio,
     windings,
   ],
   result: { type: 'number', unit: 'as guaranteed' },
-  compute: (it: string, g: number, std: string, bound: string, z: number | undefined, w: string) =>
-    toleranceLimit(parseItem(it), g, parseStandard(std), oneOf('bound', bound, ['upper', 'lower'] as const), z, parseWindings(w)),
+  compute: toleranceLimit,
 });
 
 export const TESTOK = each({
@@ -61,18 +48,14 @@ export const TESTOK = each({
   args: [
     num('measured', 'as the item', 'Result from the test report, in the unit of the guarantee.', 12800),
     num('guaranteed', 'as the item', 'Guaranteed (declared) value.', 12000),
-    item,
+    withSample(item, 'total loss'),
     standard,
     zForRatio,
     windings,
   ],
   result: { type: 'boolean', unit: 'TRUE/FALSE' },
-  compute: (m: number, g: number, it: string, std: string, z: number | undefined, w: string) =>
-    withinTolerance(m, g, parseItem(it), parseStandard(std), z, parseWindings(w)),
+  compute: withinTolerance,
 });
-
-const material = text('material', 'Winding conductor: "Cu" or "Al".', 'Cu', { default: 'Cu' });
-const lossStandard = text('standard', '"IEEE" (copper Tk 234.5) or "IEC" (copper Tk 235); aluminium is 225 in both.', 'IEEE', { default: 'IEEE' });
 
 export const RCORR = each({
   name: 'RCORR',
@@ -87,7 +70,7 @@ export const RCORR = each({
     lossStandard,
   ],
   result: { type: 'number', unit: 'Ω' },
-  compute: (r: number, from: number, to: number, m: string, std: string) => resistanceAtTemperature(r, from, to, parseMaterial(m), parseLossStandard(std)),
+  compute: resistanceAtTemperature,
 });
 
 export const ZCORR = each({
@@ -108,8 +91,7 @@ export const ZCORR = each({
     lossStandard,
   ],
   result: { type: 'number', unit: 'fraction' },
-  compute: (z: number, kva: number, pk: number, from: number, to: number, i2r: number | undefined, m: string, std: string) =>
-    impedanceAtTemperature(z, kva, pk, from, to, i2r, parseMaterial(m), parseLossStandard(std)),
+  compute: impedanceAtTemperature,
 });
 
 export const IPEAK = each({
@@ -118,13 +100,13 @@ export const IPEAK = each({
   help: 'Asymmetrical peak short-circuit current at the secondary terminals: ISC × k√2, the IEC 60076-5 peak factor of the combined X/R (1.8√2 above X/R 14). Leave source_mva blank for an infinite source; a source without X/R is taken as pure reactance (the larger peak). Planning estimate: to be verified by a qualified engineer.',
   source: 'IEC 60076-5 peak factor k√2 (table values from memory), computed as the exact first peak of an R-L circuit switched onto a sine; checked against the IEC 60909 κ approximation',
   args: [
-    num('kva', 'kVA', 'Nameplate rating.', 1000),
-    num('v', 'V', 'Voltage, line-to-line for three-phase.', 480),
-    num('z', 'fraction', 'Impedance as a percentage of the rating, e.g. 5.75%.', 0.0575),
+    kva,
+    volts,
+    impedance,
     num('x_r', 'ratio', 'X/R of the transformer impedance, e.g. 5.', 5),
     num('source_mva', 'MVA', 'Short-circuit power of the supply; blank for an infinite source.', 500, { optional: true }),
     num('source_x_r', 'ratio', 'X/R of the supply; blank takes it as pure reactance.', 15, { optional: true }),
-    num('phases', 'phases', '1 or 3.', 3, { default: 3 }),
+    phases,
   ],
   result: { type: 'number', unit: 'A' },
   compute: peakShortCircuitCurrent,
@@ -140,14 +122,14 @@ export const SCTEMP = each({
     num('t_s', 's', 'Duration of the short circuit; IEC 60076-5 uses 2 s unless agreed otherwise.', 2, { default: 2 }),
     material,
     num('theta0_c', '°C', 'Winding temperature at the start: 105 °C (40 °C ambient + 65 K average winding rise) unless known.', 105, { default: 105 }),
-    text('output', '"temperature" (θ1, the default) or "limit" (the standard’s highest permissible θ1 for the material).', 'temperature', {
+    choice('output', '"temperature" (θ1, the default) or "limit" (the standard’s highest permissible θ1 for the material).', {
+      options: ['temperature', 'limit'],
       default: 'temperature',
     }),
   ],
   result: { type: 'number', unit: '°C' },
-  compute: (j: number, t: number, m: string, theta0: number, output: string) => {
-    const mat = parseMaterial(m);
-    const temperature = shortCircuitTemperature(j, t, mat, theta0);
-    return oneOf('output', output, ['temperature', 'limit'] as const) === 'limit' ? SHORT_CIRCUIT_LIMIT_C[mat] : temperature;
+  compute: (j, t, m, theta0, output) => {
+    const temperature = shortCircuitTemperature(j, t, m, theta0);
+    return output === 'limit' ? SHORT_CIRCUIT_LIMIT_C[m] : temperature;
   },
 });

@@ -5,20 +5,14 @@ import {
   hotSpotSteady,
   lifeUsedHours,
   maxLoadForHotSpot,
-  parsePaper,
   relativeAgingRate,
 } from '../../core/thermal';
-import { block, each, num, series, text } from '../declaration';
+import { ambient, cooling, load, loads, paper, thermalMethod, withSample } from '../arguments';
+import { block, each, num, series } from '../declaration';
 
 const GROUP = 'Loading and aging';
 const SOURCE = 'IEEE C57.91 clause 7; IEC 60076-7 clause 8 and Table 4 (from memory)';
 
-const cooling = text(
-  'cooling',
-  'Cooling mode: "ONAN", "ONAF", "OFAF" (or "OF"), "ODAF" (or "OD"); sets the exponents, time constants and rated rises.',
-  'ONAN',
-  { default: 'ONAN' },
-);
 const topOilRise = num('top_oil_rise', 'K', "Top-oil rise over ambient at rated load (test report); blank takes the cooling mode's table value.", 55, {
   optional: true,
 });
@@ -26,23 +20,12 @@ const hsGradient = num('hs_gradient', 'K', "Hot-spot rise over top oil at rated 
   optional: true,
 });
 const lossRatio = num('loss_ratio', 'ratio', 'Load loss at rated current ÷ no-load loss; blank takes the table value.', 5, { optional: true });
-const method = text(
-  'method',
-  '"IEEE" (C57.91 clause 7, default), "IEC" (60076-7; ONAN takes the distribution-transformer row, the other coolings the power-transformer rows) or "IEC-POWER" (60076-7 power-transformer rows for every cooling, ONAN included).',
-  'IEEE',
-  { default: 'IEEE' },
-);
-const paper = text('paper', '"upgraded" (thermally upgraded paper, rate 1 at 110 °C, the default) or "normal" (kraft paper, rate 1 at 98 °C).', 'upgraded', {
-  default: 'upgraded',
-});
 const hotspot = num('hotspot_c', '°C', 'Winding hot-spot temperature, -60 to 250 °C.', 120);
-const loads = series('loads', 'per unit', 'Loading profile: one per-unit load (kVA / nameplate kVA) per step, e.g. 8,760 hourly values.', [
-  0.6, 0.7, 0.9, 1.2, 1.3, 1.1, 0.8, 0.6,
-]);
+const profileLoads = withSample(loads, [0.6, 0.7, 0.9, 1.2, 1.3, 1.1, 0.8, 0.6]);
 const ambients = series('ambients', '°C', 'Ambient temperature: one value for the whole profile or one per step, -60 to 60 °C.', [25]);
 const hours = num('hours', 'h', 'Length of every step of the profile.', 1, { default: 1 });
-const thermalArgs = [cooling, topOilRise, hsGradient, lossRatio, method];
-const profileArgs = [loads, ambients, hours, ...thermalArgs];
+const thermalArgs = [cooling, topOilRise, hsGradient, lossRatio, thermalMethod] as const;
+const profileArgs = [profileLoads, ambients, hours, ...thermalArgs] as const;
 
 export const HOTSPOT = each({
   name: 'HOTSPOT',
@@ -50,8 +33,8 @@ export const HOTSPOT = each({
   help: 'Steady-state winding hot-spot temperature at a constant load: ambient + top-oil rise × [(load² × R + 1)/(R + 1)]^n + hot-spot gradient × load^(2m).',
   source: SOURCE,
   args: [
-    num('load', 'per unit', 'Load as a fraction of nameplate kVA; 1 = full load.', 1),
-    num('ambient_c', '°C', 'Ambient temperature, -60 to 60 °C.', 30),
+    withSample(load, 1),
+    ambient,
     ...thermalArgs,
   ],
   result: { type: 'number', unit: '°C' },
@@ -75,7 +58,7 @@ export const AGERATE = each({
   source: 'IEC 60076-7 relative aging rate; IEEE C57.91 clause 5 (from memory)',
   args: [hotspot, paper],
   result: { type: 'number', unit: 'per unit of normal aging' },
-  compute: (hotSpotC: number, paperText: string) => relativeAgingRate(hotSpotC, parsePaper(paperText)),
+  compute: relativeAgingRate,
 });
 
 export const HOTSPOTS = block({
@@ -114,7 +97,7 @@ export const MAXLOAD = each({
   help: 'Largest constant per-unit load whose steady hot-spot reaches limit_c at this ambient (the root of the HOTSPOT equation). #NUM! when even no load reaches the limit.',
   source: SOURCE,
   args: [
-    num('ambient_c', '°C', 'Ambient temperature, -60 to 60 °C.', 30),
+    ambient,
     num('limit_c', '°C', 'Hot-spot limit, 60 to 200 °C: 110 °C is rated for upgraded paper (IEEE), 98 °C for normal paper (IEC).', 110, { default: 110 }),
     ...thermalArgs,
   ],

@@ -8,7 +8,6 @@
  * Over a profile, the equivalent aging F_EQA = Σ V_n·Δt_n / Σ Δt_n, and the life consumed is
  * Σ V_n·Δt_n hours at the reference temperature (IEEE C57.91 clause 5, from memory).
  */
-import { InputError } from '../errors';
 import { nonNegative, positive, within } from '../guards';
 import { NORMAL_LIFE_HOURS } from './coolingTable';
 
@@ -20,13 +19,6 @@ const A = B / 383;
 const CELSIUS_TO_KELVIN = 273;
 /** ln 2 / 6: the normal-paper rate doubles every 6 K. */
 const DOUBLING = Math.LN2 / 6;
-
-export function parsePaper(text: string): Paper {
-  const t = String(text).trim().toLowerCase().replace(/[\s_-]+/g, ' ');
-  if (t === 'upgraded' || t === 'thermally upgraded' || t === 'tu') return 'upgraded';
-  if (t === 'normal' || t === 'kraft' || t === 'non upgraded' || t === 'not upgraded') return 'normal';
-  throw new InputError('paper', `"${text}" is not a paper kind; use "upgraded" (thermally upgraded, 110 °C reference) or "normal" (kraft, 98 °C reference)`);
-}
 
 /** Hot-spot temperatures the aging laws are asked about: -60 to 250 °C (plausibility bound). */
 function hotSpot(name: string, value: number): number {

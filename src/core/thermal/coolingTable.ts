@@ -19,7 +19,6 @@
  *    80 K rated hot-spot rise split 55 K top oil + 25 K gradient (common practice), and borrow the
  *    loss ratio and time constants of the IEC 60076-7 Table 4 row of the same cooling (from memory).
  */
-import { InputError } from '../errors';
 
 /** Cooling modes as IEC 60076-7 groups them; IEEE's OFAF/OFWF are OF, ODAF/ODWF are OD. */
 export type Cooling = 'ONAN' | 'ONAF' | 'OF' | 'OD';
@@ -136,31 +135,6 @@ export const THERMAL_ROWS: readonly ThermalCharacteristics[] = [
   IEC_DISTRIBUTION_ONAN,
   ...Object.values(IEC_POWER),
 ];
-
-const COOLING_NAMES: Readonly<Record<string, Cooling>> = {
-  ONAN: 'ONAN',
-  ONAF: 'ONAF',
-  OF: 'OF',
-  OFAF: 'OF',
-  OFWF: 'OF',
-  OD: 'OD',
-  ODAF: 'OD',
-  ODWF: 'OD',
-};
-
-export function parseCooling(text: string): Cooling {
-  const cooling = COOLING_NAMES[String(text).trim().toUpperCase()];
-  if (cooling === undefined) {
-    throw new InputError('cooling', `"${text}" is not a cooling mode; use "ONAN", "ONAF", "OFAF" (or "OF") or "ODAF" (or "OD")`);
-  }
-  return cooling;
-}
-
-export function parseThermalMethod(text: string): ThermalMethod {
-  const t = String(text).trim().toUpperCase().replace(/[\s_]+/g, '-');
-  if (t === 'IEEE' || t === 'IEC' || t === 'IEC-POWER') return t;
-  throw new InputError('method', `"${text}" is not a loading method; use "IEEE" (C57.91), "IEC" (60076-7) or "IEC-POWER" (60076-7, power-transformer rows)`);
-}
 
 /** The table row for a method and cooling mode (see ThermalMethod for the IEC ONAN choice). */
 export function thermalCharacteristics(method: ThermalMethod, cooling: Cooling): ThermalCharacteristics {

@@ -1,11 +1,11 @@
 /**
  * Loading and aging of oil-immersed transformers (IEEE C57.91 clause 7; IEC 60076-7): hot-spot
  * temperature in steady state and over a profile, insulation aging, life consumed, and the
- * largest steady load for a hot-spot limit. The functions named like the cell arguments take the
- * cooling, method and paper as the text a user types; the demo and other code call loadingYear.
+ * largest steady load for a hot-spot limit. Cooling, method and paper arrive as
+ * their typed unions; the cell declarations parse the text a user types.
  */
-import { agingRateSum, lifeFraction, parsePaper, referenceHotSpot, type Paper } from './aging';
-import { NORMAL_LIFE_HOURS, type ThermalCharacteristics } from './coolingTable';
+import { agingRateSum, lifeFraction, referenceHotSpot, type Paper } from './aging';
+import { NORMAL_LIFE_HOURS, type Cooling, type ThermalCharacteristics, type ThermalMethod } from './coolingTable';
 import { maxSteadyLoad, steadyHotSpot, thermalModel } from './steadyState';
 import { checkProfile, hotSpotSeriesInto } from './transient';
 
@@ -14,28 +14,28 @@ export * from './coolingTable';
 export * from './steadyState';
 export * from './transient';
 
-/** XFMR.HOTSPOT: steady-state hot-spot temperature, °C. */
+/** Steady-state hot-spot temperature, °C. */
 export function hotSpotSteady(
   load: number,
   ambientC: number,
-  cooling: string,
+  cooling: Cooling,
   topOilRise: number | undefined,
   hotSpotGradient: number | undefined,
   lossRatio: number | undefined,
-  method: string,
+  method: ThermalMethod,
 ): number {
   return steadyHotSpot(thermalModel(cooling, method, topOilRise, hotSpotGradient, lossRatio), load, ambientC);
 }
 
-/** XFMR.MAXLOAD: largest steady per-unit load whose hot-spot reaches limit_c. */
+/** Largest steady per-unit load whose hot-spot reaches limit_c. */
 export function maxLoadForHotSpot(
   ambientC: number,
   limitC: number,
-  cooling: string,
+  cooling: Cooling,
   topOilRise: number | undefined,
   hotSpotGradient: number | undefined,
   lossRatio: number | undefined,
-  method: string,
+  method: ThermalMethod,
 ): number {
   return maxSteadyLoad(thermalModel(cooling, method, topOilRise, hotSpotGradient, lossRatio), ambientC, limitC);
 }
@@ -46,36 +46,36 @@ function profileHotSpots(m: ThermalCharacteristics, loads: Float64Array, ambient
   return hotSpotSeriesInto(m, loads, ambients, stepHours, new Float64Array(loads.length));
 }
 
-/** XFMR.HOTSPOTS: the transient hot-spot series, one value per step, °C. */
+/** The transient hot-spot series, one value per step, °C. */
 export function hotSpotProfile(
   loads: Float64Array,
   ambients: Float64Array,
   stepHours: number,
-  cooling: string,
+  cooling: Cooling,
   topOilRise: number | undefined,
   hotSpotGradient: number | undefined,
   lossRatio: number | undefined,
-  method: string,
+  method: ThermalMethod,
 ): Float64Array {
   return profileHotSpots(thermalModel(cooling, method, topOilRise, hotSpotGradient, lossRatio), loads, ambients, stepHours);
 }
 
-/** The arguments of FEQA and LIFEUSED: those of hotSpotProfile, then the paper kind. */
-type AgingArgs = [...Parameters<typeof hotSpotProfile>, paper: string];
+/** The arguments of equivalentAging and lifeUsedHours: those of hotSpotProfile, then the paper kind. */
+type AgingArgs = [...Parameters<typeof hotSpotProfile>, paper: Paper];
 
 /** Σ V over the profile's end-of-step hot-spots, for the paper named last. */
 function agingSum(args: AgingArgs): number {
   const [loads, ambients, stepHours, cooling, topOilRise, hotSpotGradient, lossRatio, method, paper] = args;
   const hotSpots = hotSpotProfile(loads, ambients, stepHours, cooling, topOilRise, hotSpotGradient, lossRatio, method);
-  return agingRateSum(hotSpots, parsePaper(paper));
+  return agingRateSum(hotSpots, paper);
 }
 
-/** XFMR.FEQA: equivalent aging factor over the profile, Σ V·Δt / Σ Δt (equal steps: the mean rate). */
+/** Equivalent aging factor over the profile, Σ V·Δt / Σ Δt (equal steps: the mean rate). */
 export function equivalentAging(...args: AgingArgs): number {
   return agingSum(args) / args[0].length;
 }
 
-/** XFMR.LIFEUSED: insulation life consumed over the profile, Σ V·Δt, hours at the reference hot-spot. */
+/** Insulation life consumed over the profile, Σ V·Δt, hours at the reference hot-spot. */
 export function lifeUsedHours(...args: AgingArgs): number {
   return agingSum(args) * args[2];
 }
@@ -83,12 +83,12 @@ export function lifeUsedHours(...args: AgingArgs): number {
 export interface LoadingYearOptions {
   /** Step length, h (default 1). */
   readonly stepHours?: number;
-  /** "ONAN" (default), "ONAF", "OFAF"/"OF", "ODAF"/"OD". */
-  readonly cooling?: string;
-  /** "IEEE" (default), "IEC" or "IEC-POWER". */
-  readonly method?: string;
-  /** "upgraded" (default, 110 °C reference) or "normal" (98 °C reference). */
-  readonly paper?: string;
+  /** ONAN by default. */
+  readonly cooling?: Cooling;
+  /** IEEE by default. */
+  readonly method?: ThermalMethod;
+  /** upgraded by default (110 °C reference); normal has the 98 °C reference. */
+  readonly paper?: Paper;
   /** The unit's rated top-oil rise, hot-spot gradient (K) and loss ratio; absent: the table's. */
   readonly topOilRise?: number;
   readonly hotSpotGradient?: number;
@@ -116,7 +116,7 @@ export interface LoadingYear {
 export function loadingYear(loads: Float64Array, ambients: Float64Array, options: LoadingYearOptions = {}): LoadingYear {
   const stepHours = options.stepHours ?? 1;
   const model = thermalModel(options.cooling ?? 'ONAN', options.method ?? 'IEEE', options.topOilRise, options.hotSpotGradient, options.lossRatio);
-  const paper = parsePaper(options.paper ?? 'upgraded');
+  const paper = options.paper ?? 'upgraded';
   const hotSpots = profileHotSpots(model, loads, ambients, stepHours);
   let peak = -Infinity;
   for (let i = 0; i < hotSpots.length; i++) if (hotSpots[i]! > peak) peak = hotSpots[i]!;

@@ -8,7 +8,7 @@
  */
 import { NoAnswerError, shown } from '../errors';
 import { ambientTemperature, perUnitLoadAtMost, positive, within } from '../guards';
-import { parseCooling, parseThermalMethod, thermalCharacteristics, type ThermalCharacteristics } from './coolingTable';
+import { thermalCharacteristics, type Cooling, type ThermalCharacteristics, type ThermalMethod } from './coolingTable';
 
 /** Loads above this many per unit are refused: far beyond the loading guides' emergency limits. */
 export const MAX_THERMAL_LOAD = 3;
@@ -18,17 +18,17 @@ export function thermalLoad(name: string, value: number): number {
 }
 
 /**
- * The table row for the cooling and method named in cells, with the unit's own rated top-oil
+ * The table row for the cooling and method, with the unit's own rated top-oil
  * rise, hot-spot gradient and loss ratio where given (undefined keeps the table's value).
  */
 export function thermalModel(
-  cooling: string,
-  method: string,
+  cooling: Cooling,
+  method: ThermalMethod,
   topOilRise: number | undefined,
   hotSpotGradient: number | undefined,
   lossRatio: number | undefined,
 ): ThermalCharacteristics {
-  const row = thermalCharacteristics(parseThermalMethod(method), parseCooling(cooling));
+  const row = thermalCharacteristics(method, cooling);
   if (topOilRise === undefined && hotSpotGradient === undefined && lossRatio === undefined) return row;
   return {
     ...row,
