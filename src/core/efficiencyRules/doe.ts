@@ -1,17 +1,11 @@
 /**
- * Efficiency regulations: the US DOE minimum efficiencies of distribution transformers
- * (10 CFR 431.196) and the EU Ecodesign Tier 2 maximum losses of three-phase liquid-immersed
- * medium power transformers (Regulation (EU) No 548/2014, Annex I, Table I.1, as amended by
- * Regulation (EU) 2019/1783). Tables are typed once from the regulation text, each with the
- * paragraph it comes from; the reference tests re-read every row against the printed tables.
+ * US DOE minimum efficiencies of distribution transformers (10 CFR 431.196), the regulation's
+ * scope (10 CFR 431.192) and the minimum for a rating. Every table is typed once from the
+ * regulation text with the paragraph it comes from.
  */
-import { efficiencyAt } from './efficiency';
-import { InputError, NotInTableError, shown } from './errors';
-import { nonNegative, phaseCount, positive } from './guards';
-
-// ---------------------------------------------------------------------------------------------
-// US DOE, 10 CFR 431.196
-// ---------------------------------------------------------------------------------------------
+import { InputError, NotInTableError, shown } from '../errors';
+import { phaseCount, positive } from '../guards';
+import { interpolate } from './interpolation';
 
 /**
  * Source of every DOE row: 10 CFR 431.196 as amended at 89 FR 30040 (Apr. 22, 2024), read in the
@@ -175,28 +169,6 @@ export function findDoeTable(kind: DoeKind, phases: 1 | 3, levels: DoeLevels, bi
   return t;
 }
 
-/**
- * Linear interpolation in a table of ascending kVA rows, as 10 CFR 431.196 directs for ratings
- * between rows ("linear interpolation of the kVA and efficiency values immediately above and
- * below that kVA rating"). A rating outside the first and last row has no value: NotInTableError.
- */
-function interpolate(rows: readonly { readonly kva: number; readonly value: number }[], kva: number, what: string): number {
-  const first = rows[0]!;
-  const last = rows[rows.length - 1]!;
-  if (kva < first.kva || kva > last.kva) {
-    throw new NotInTableError('kva', `${shown(kva)} kVA is outside ${what}, which runs from ${shown(first.kva)} to ${shown(last.kva)} kVA`);
-  }
-  for (let i = 0; i < rows.length; i++) {
-    const hi = rows[i]!;
-    if (kva === hi.kva) return hi.value;
-    if (kva < hi.kva) {
-      const lo = rows[i - 1]!;
-      return lo.value + ((hi.value - lo.value) * (kva - lo.kva)) / (hi.kva - lo.kva);
-    }
-  }
-  return last.value;
-}
-
 function describeDoe(t: DoeTable): string {
   return `the ${t.kind} ${t.phases}-phase table of 10 CFR ${t.paragraph}${t.bil ? ` (BIL ${t.bil})` : ''}`;
 }
@@ -254,160 +226,8 @@ export function doeMinimumEfficiency(
   return doeMinimumOf(doeTableFor(kind, phases, levels, bilKv), s);
 }
 
-function doeMinimumOf(t: DoeTable, kva: number): number {
+/** The minimum of a table already found, so a caller that needs the table too looks it up once. */
+export function doeMinimumOf(t: DoeTable, kva: number): number {
   const rows = t.rows.map((r) => ({ kva: r.kva, value: r.percent }));
   return interpolate(rows, kva, describeDoe(t)) / 100;
-}
-
-// ---------------------------------------------------------------------------------------------
-// EU Ecodesign, Regulation (EU) No 548/2014 Annex I Table I.1, Tier 2 (from 1 July 2021)
-// ---------------------------------------------------------------------------------------------
-
-export interface EuTier2Row {
-  /** Rated power; the first row stands for "≤ 25 kVA". */
-  readonly kva: number;
-  /** Maximum load loss Pk, W (the Ak level). */
-  readonly pkW: number;
-  /** Maximum no-load loss P0, W (the A0 − 10 % level). */
-  readonly p0W: number;
-  /** Where the row's values come from. */
-  readonly source: string;
-}
-
-/**
- * FROM MEMORY: no stored copy of Annex I Table I.1 could be read (the search tool held the
- * regulation's articles, not the annex tables). Values are the Tier 2 levels as recalled — Ak for
- * the load loss and A0 − 10 % for the no-load loss of three-phase liquid-immersed medium power
- * transformers with one winding Um ≤ 24 kV and the other Um ≤ 1.1 kV — to be confirmed against
- * the Official Journal text before they are relied on. That the 2019/1783 amendment left the
- * ≤ 24 kV values unchanged is stated by powerfullstop.com ("Update of Tables: no changes in
- * reference to the insulation class up to 24 kV"); the ≥ 5 kVA lower bound of a medium power
- * transformer is Article 2(3) of 548/2014 (legislation.gov.uk, eur/2014/548/article/2).
- */
-const EU_FROM_MEMORY = 'EU 548/2014 Annex I Table I.1, Tier 2 (from memory)';
-export const EU_TIER2_LIQUID: readonly EuTier2Row[] = Object.freeze(
-  (
-    [
-      [25, 600, 63],
-      [50, 750, 81],
-      [100, 1250, 130],
-      [160, 1750, 189],
-      [250, 2350, 270],
-      [315, 2800, 324],
-      [400, 3250, 387],
-      [500, 3900, 459],
-      [630, 4600, 540],
-      [800, 6000, 585],
-      [1000, 7600, 693],
-      [1250, 9500, 855],
-      [1600, 12000, 1080],
-      [2000, 15000, 1305],
-      [2500, 18500, 1575],
-      [3150, 23000, 1980],
-    ] as const
-  ).map(([kva, pkW, p0W]) => Object.freeze({ kva, pkW, p0W, source: EU_FROM_MEMORY })),
-);
-
-/** Medium power transformers start at 5 kVA (548/2014 Article 2(3)). */
-const EU_MEDIUM_POWER_MIN_KVA = 5;
-
-export type EuLoss = 'pk' | 'p0';
-
-/** Table I.1 covers one winding with Um ≤ 24 kV and the other with Um ≤ 1.1 kV. */
-export const EU_TABLE_MAX_HV_UM_KV = 24;
-export const EU_TABLE_MAX_LV_UM_KV = 1.1;
-
-/**
- * A unit outside Table I.1 has no row here: windings of a higher Um (the regulation allows higher
- * losses for them by other rules of Annex I) and pole-mounted units (their own table in Annex I).
- * Neither is held by Fluxbook, so both are NotInTableError. A blank voltage is taken as within the
- * table's range, as the help says.
- */
-export function checkEuScope(hvUmKv: number | undefined, lvUmKv: number | undefined, poleMounted: boolean): void {
-  if (poleMounted) {
-    throw new NotInTableError('pole_mounted', 'pole-mounted units have their own maximum losses in Annex I of EU 548/2014, which Fluxbook does not hold; Table I.1 is for ground-mounted units');
-  }
-  if (hvUmKv !== undefined && positive('hv_um_kv', hvUmKv) > EU_TABLE_MAX_HV_UM_KV) {
-    throw new NotInTableError('hv_um_kv', `Um ${shown(hvUmKv)} kV is above 24 kV: Table I.1 covers windings up to Um 24 kV; higher-voltage units have other limits in Annex I, not held here`);
-  }
-  if (lvUmKv !== undefined && positive('lv_um_kv', lvUmKv) > EU_TABLE_MAX_LV_UM_KV) {
-    throw new NotInTableError('lv_um_kv', `Um ${shown(lvUmKv)} kV is above 1.1 kV: Table I.1 covers a second winding up to Um 1.1 kV; other units have other limits in Annex I, not held here`);
-  }
-}
-
-/**
- * Maximum Tier 2 loss in W for a rating. The "≤ 25" row holds from 5 to 25 kVA; between rows the
- * limit is interpolated linearly, as Annex I directs for intermediate ratings (from memory).
- * Above 3150 kVA the regulation sets a minimum peak efficiency index instead: no row.
- */
-export function euMaximumLoss(kva: number, which: EuLoss, hvUmKv?: number, lvUmKv?: number, poleMounted = false): number {
-  const s = positive('kva', kva);
-  checkEuScope(hvUmKv, lvUmKv, poleMounted);
-  if (s < EU_MEDIUM_POWER_MIN_KVA) {
-    throw new NotInTableError('kva', `${shown(s)} kVA is below 5 kVA, the smallest medium power transformer of EU 548/2014`);
-  }
-  const rows = EU_TIER2_LIQUID.map((r) => ({ kva: r.kva, value: which === 'pk' ? r.pkW : r.p0W }));
-  if (s <= rows[0]!.kva) return rows[0]!.value;
-  if (s > rows[rows.length - 1]!.kva) {
-    throw new NotInTableError('kva', `${shown(s)} kVA is above 3150 kVA; EU 548/2014 sets a minimum peak efficiency index there, not maximum losses`);
-  }
-  return interpolate(rows, s, 'EU 548/2014 Table I.1');
-}
-
-// ---------------------------------------------------------------------------------------------
-// Compliance of a unit's test-report losses
-// ---------------------------------------------------------------------------------------------
-
-export type Rule = 'DOE' | 'EU' | 'both';
-
-/**
- * TRUE when the losses meet the rule. DOE: the efficiency at the table's test load (50 %, or 35 %
- * for low-voltage dry-type), power factor 1, is at least the minimum, compared unrounded. EU: both
- * P0 and Pk are at most the Tier 2 maxima (three-phase liquid-immersed only).
- *
- * Each rule judges losses measured its own way: the DOE test procedure (10 CFR 431 subpart K,
- * appendix A) at 60 Hz with the load loss at 55 °C for liquid-immersed units, the EU rule at
- * 50 Hz with the load loss at 75 °C (IEC 60076-1). One pair of losses cannot be right for both,
- * so "both" takes the DOE losses in p0_w, pk_w and the EU losses in p0_eu_w, pk_eu_w, and refuses
- * when the EU pair is blank.
- */
-export function meetsEfficiencyRule(
-  kva: number,
-  p0Watts: number,
-  pkWatts: number,
-  rule: Rule,
-  kind: DoeKind,
-  phases: number,
-  levels: number,
-  bilKv: number | undefined,
-  p0EuWatts?: number,
-  pkEuWatts?: number,
-): boolean {
-  const s = positive('kva', kva);
-  const p0 = nonNegative('p0_w', p0Watts);
-  const pk = nonNegative('pk_w', pkWatts);
-  let euP0 = p0;
-  let euPk = pk;
-  if (rule === 'both') {
-    if (p0EuWatts === undefined || pkEuWatts === undefined) {
-      throw new InputError(
-        p0EuWatts === undefined ? 'p0_eu_w' : 'pk_eu_w',
-        'is blank; "both" needs the EU losses (50 Hz, load loss at 75 °C) in p0_eu_w and pk_eu_w as well as the DOE losses (60 Hz, load loss at 55 °C for liquid-immersed) in p0_w and pk_w',
-      );
-    }
-    euP0 = nonNegative('p0_eu_w', p0EuWatts);
-    euPk = nonNegative('pk_eu_w', pkEuWatts);
-  }
-  let ok = true;
-  if (rule !== 'EU') {
-    const t = doeTableFor(kind, phases, levels, bilKv);
-    ok = efficiencyAt(s, p0, pk, t.testLoad, 1) >= doeMinimumOf(t, s);
-  }
-  if (rule !== 'DOE') {
-    if (kind !== 'liquid' || phaseCount('phases', phases) !== 3) {
-      throw new NotInTableError('kind', 'the EU Tier 2 table in Fluxbook covers three-phase liquid-immersed units only');
-    }
-    ok = ok && euP0 <= euMaximumLoss(s, 'p0') && euPk <= euMaximumLoss(s, 'pk');
-  }
-  return ok;
 }
