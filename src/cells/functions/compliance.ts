@@ -12,9 +12,12 @@ export const COMPLIES = each({
     withSample(kva, 500),
     withSample(p0, 420),
     withSample(pk, 3800),
-    choice('rule', '"DOE", "EU" or "both" (then p0_w, pk_w are the DOE losses and p0_eu_w, pk_eu_w the EU ones).', {
-      options: ['DOE', 'EU', 'both'] as const satisfies readonly Rule[],
-    }),
+    withSample(
+      choice('rule', '"DOE", "EU" or "both" (then p0_w, pk_w are the DOE losses and p0_eu_w, pk_eu_w the EU ones).', {
+        options: ['DOE', 'EU', 'both'] as const satisfies readonly Rule[],
+      }),
+      'both',
+    ),
     doeKind,
     phases,
     doeLevels,

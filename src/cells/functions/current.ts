@@ -1,5 +1,5 @@
 import { apparentPowerKva, faultCurrent, ratedCurrent, windingCurrent, type WindingSide } from '../../core/current';
-import { blankable, impedance, kva, phases, volts } from '../arguments';
+import { blankable, impedance, kva, phases, volts, withSample } from '../arguments';
 import { choice, each, num, text } from '../declaration';
 
 const GROUP = 'Current and power';
@@ -22,13 +22,16 @@ export const IWINDING = each({
   args: [
     kva,
     volts,
-    text('vector_letter', 'Connection of the winding v belongs to: D, Y, YN, Z or ZN (either case); or a vector group such as Dyn11 together with side.', 'D'),
+    text('vector_letter', 'Connection of the winding v belongs to: D, Y, YN, Z or ZN (either case); or a vector group such as Dyn11 together with side.', 'Dyn11'),
     phases,
-    blankable(
-      choice('side', '"HV" or "LV": the winding of the vector group that v belongs to; needed only when vector_letter is a whole vector group.', {
-        options: ['HV', 'LV'] as const satisfies readonly WindingSide[],
-        aliases: { high: 'HV', low: 'LV', primary: 'HV', secondary: 'LV' },
-      }),
+    withSample(
+      blankable(
+        choice('side', '"HV" or "LV": the winding of the vector group that v belongs to; needed only when vector_letter is a whole vector group.', {
+          options: ['HV', 'LV'] as const satisfies readonly WindingSide[],
+          aliases: { high: 'HV', low: 'LV', primary: 'HV', secondary: 'LV' },
+        }),
+      ),
+      'LV',
     ),
   ],
   result: { type: 'number', unit: 'A' },
