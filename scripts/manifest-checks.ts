@@ -66,23 +66,11 @@ export const OFFICE_APP_ORDER = [
   'VersionOverrides',
 ] as const;
 
+/** The children of OFFICE_APP_ORDER a Fluxbook manifest may leave out; it must have every other one. */
+const OFFICE_APP_OPTIONAL: ReadonlySet<string> = new Set(['AlternateId', 'AppDomains', 'Dictionary']);
+
 /** The children Fluxbook's manifest must have (schema-required plus our own requirements, see above). */
-export const OFFICE_APP_REQUIRED = [
-  'Id',
-  'Version',
-  'ProviderName',
-  'DefaultLocale',
-  'DisplayName',
-  'Description',
-  'IconUrl',
-  'HighResolutionIconUrl',
-  'SupportUrl',
-  'Hosts',
-  'Requirements',
-  'DefaultSettings',
-  'Permissions',
-  'VersionOverrides',
-] as const;
+export const OFFICE_APP_REQUIRED = OFFICE_APP_ORDER.filter((name) => !OFFICE_APP_OPTIONAL.has(name));
 
 export const PERMISSIONS = ['Restricted', 'ReadDocument', 'ReadAllDocument', 'WriteDocument', 'ReadWriteDocument'] as const;
 export const MAX_RESOURCE_ID = 32;

@@ -272,8 +272,16 @@ interface Prepared {
   readonly constantFault: Fault | undefined;
 }
 
+/** What `adapt` fixes once for a declaration: its arguments, their cell readers and the host's errors. */
+interface Adapted {
+  readonly decls: readonly ArgDecl[];
+  readonly readers: readonly CellReader[];
+  readonly makeError: ErrorFactory;
+  readonly isError: IsError;
+}
+
 /** Steps 1 and 2 for an `each` function, argument by argument in declaration order. */
-function prepare(decls: readonly ArgDecl[], readers: readonly CellReader[], raw: unknown[], isError: IsError): Prepared {
+function prepare({ decls, readers, isError }: Adapted, raw: unknown[]): Prepared {
   const n = decls.length;
   const buf = new Array<ArgValue>(n);
   const varying: Varying[] = [];
@@ -299,26 +307,20 @@ function prepare(decls: readonly ArgDecl[], readers: readonly CellReader[], raw:
   return { rows: shape.rows, cols: shape.cols, buf, varying, constantFault };
 }
 
-function runEach(
-  call: (b: ArgValue[]) => Scalar,
-  decls: readonly ArgDecl[],
-  readers: readonly CellReader[],
-  raw: unknown[],
-  makeError: ErrorFactory,
-  isError: IsError,
-): unknown[][] {
-  const { rows, cols, buf, varying, constantFault } = prepare(decls, readers, raw, isError);
+function runEach(a: Adapted, call: (b: ArgValue[]) => Scalar, raw: unknown[]): unknown[][] {
+  const makeError = a.makeError;
+  const { rows, cols, buf, varying, constantFault } = prepare(a, raw);
   const v = varying.length;
   const element = (i: number, j: number): unknown => {
     if (constantFault !== undefined) return faultCell(constantFault, makeError);
     for (let q = 0; q < v; q++) {
-      const a = varying[q]!;
-      const cell = a.cells[i * a.rowSel]![j * a.colSel];
-      if (a.numeric && isFiniteNumber(cell)) {
-        buf[a.k] = cell;
+      const r = varying[q]!;
+      const cell = r.cells[i * r.rowSel]![j * r.colSel];
+      if (r.numeric && isFiniteNumber(cell)) {
+        buf[r.k] = cell;
         continue;
       }
-      const fault = a.read(cell, buf, a.k);
+      const fault = r.read(cell, buf, r.k);
       if (fault !== undefined) return faultCell(fault, makeError);
     }
     try {
@@ -341,14 +343,7 @@ function runEach(
 }
 
 /** A block function takes single values (or whole series); any fault is the whole result. */
-function runBlock(
-  compute: BlockCompute,
-  decls: readonly ArgDecl[],
-  readers: readonly CellReader[],
-  raw: unknown[],
-  makeError: ErrorFactory,
-  isError: IsError,
-): unknown[][] {
+function runBlock({ decls, readers, makeError, isError }: Adapted, compute: BlockCompute, raw: unknown[]): unknown[][] {
   const values = new Array<ArgValue>(decls.length);
   decls.forEach((d, k) => {
     if (d.series) {
@@ -368,13 +363,16 @@ function runBlock(
 
 /** Builds the spreadsheet-facing function for a declaration. */
 export function adapt(decl: CellFunctionDecl, makeError: ErrorFactory, options: AdaptOptions = {}): CellFunction {
-  const args = decl.args;
   const isError = options.isError ?? noHostErrors;
-  const readers = args.map((a) => cellReader(a, isError));
-  const run =
-    decl.kind === 'each'
-      ? ((call) => (raw: unknown[]) => runEach(call, args, readers, raw, makeError, isError))(caller(decl.compute, args.length))
-      : (raw: unknown[]) => runBlock(decl.compute, args, readers, raw, makeError, isError);
+  const a: Adapted = { decls: decl.args, readers: decl.args.map((d) => cellReader(d, isError)), makeError, isError };
+  let run: (raw: unknown[]) => unknown[][];
+  if (decl.kind === 'each') {
+    const call = caller(decl.compute, decl.args.length);
+    run = (raw) => runEach(a, call, raw);
+  } else {
+    const compute = decl.compute;
+    run = (raw) => runBlock(a, compute, raw);
+  }
   return (...raw: unknown[]): unknown[][] => {
     try {
       return run(raw);

@@ -4,13 +4,15 @@
  * option), printed as one line; 1 an internal fault.
  */
 import { Command, CommanderError } from 'commander';
+import packageJson from '../../package.json';
 import { SAFETY_NOTE } from '../cells/metadata';
 import type { FormulaResult } from '../engine/xlsx';
 import { calc } from './calc';
 import { demo, formatDemoSummary } from './demo';
 import { UsageError } from './files';
 
-const VERSION = '0.1.0';
+/** The version npm publishes, read from package.json so the two cannot differ. */
+const VERSION = packageJson.version;
 
 /** What the error values of a run are, where two kinds say more than a count: cycles and unknown names. */
 function errorKinds(results: FormulaResult[]): string {

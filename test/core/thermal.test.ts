@@ -12,7 +12,6 @@ import {
   IEEE_ROWS,
   lifeFraction,
   lifeUsedHours,
-  loadingYear,
   maxLoadForHotSpot,
   maxSteadyLoad,
   relativeAgingRate,
@@ -194,17 +193,5 @@ describe('profiles: checks, aging and life', () => {
   it('gives life as a fraction of the 180,000 h normal life', () => {
     expect(lifeFraction(8760)).toBeCloseTo(8760 / 180_000, 15);
     expect(lifeFraction(9000, 150_000)).toBeCloseTo(0.06, 15);
-  });
-
-  it('loadingYear gives the demo everything at once', () => {
-    const loads = Float64Array.from({ length: 8760 }, (_, i) => 0.6 + 0.4 * Math.sin((2 * Math.PI * i) / 24));
-    const ambients = Float64Array.from({ length: 8760 }, (_, i) => 10 + 12 * Math.sin((2 * Math.PI * (i - 2000)) / 8760));
-    const y = loadingYear(loads, ambients);
-    expect(y.hotSpots).toHaveLength(8760);
-    expect(y.peakHotSpot).toBe(Math.max(...y.hotSpots));
-    expect(y.lifeUsedHours).toBeCloseTo(y.equivalentAging * 8760, 6);
-    expect(y.lifeFraction).toBeCloseTo(y.lifeUsedHours / 180_000, 12);
-    expect([y.paper, y.referenceHotSpot, y.model]).toEqual(['upgraded', 110, IEEE_ROWS.ONAN]);
-    expect(y.lifeUsedHours).toBeCloseTo(lifeUsedHours(loads, ambients, 1, 'ONAN', ...none, 'IEEE', 'upgraded'), 9);
   });
 });

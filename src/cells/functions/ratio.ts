@@ -20,6 +20,9 @@ const vectorGroup = text(
   { optional: true },
 );
 
+/** Turns of the input and output windings of the ideal transformer. */
+const turns = [num('turns_in', 'turns', 'Turns of the input winding.', 100), num('turns_out', 'turns', 'Turns of the output winding.', 10)] as const;
+
 export const RATIO = each({
   name: 'RATIO',
   group: GROUP,
@@ -37,8 +40,7 @@ export const VOUT = each({
   source: 'ideal transformer, Vs/Vp = Ns/Np (common practice)',
   args: [
     num('v_in', 'V', 'Voltage applied to the input winding.', 240),
-    num('turns_in', 'turns', 'Turns of the input winding.', 100),
-    num('turns_out', 'turns', 'Turns of the output winding.', 10),
+    ...turns,
   ],
   result: { type: 'number', unit: 'V' },
   compute: idealOutputVoltage,
@@ -51,8 +53,7 @@ export const IOUT = each({
   source: 'ideal transformer, Is/Ip = Np/Ns (common practice)',
   args: [
     num('i_in', 'A', 'Current in the input winding.', 2),
-    num('turns_in', 'turns', 'Turns of the input winding.', 100),
-    num('turns_out', 'turns', 'Turns of the output winding.', 10),
+    ...turns,
   ],
   result: { type: 'number', unit: 'A' },
   compute: idealOutputCurrent,

@@ -7,13 +7,6 @@ import { InputError, NotInTableError, shown } from '../errors';
 import { phaseCount, positive } from '../guards';
 import { interpolate } from './interpolation';
 
-/**
- * Source of every DOE row: 10 CFR 431.196 as amended at 89 FR 30040 (Apr. 22, 2024), read in the
- * eCFR text mirrored at github.com/MichalOpoka/ecfr, file cfr/title-10-Energy/.../
- * subpart-K-Distribution-Transformers/.../section-431.196.md (commit 0b97486).
- */
-export const DOE_SOURCE = '10 CFR 431.196 (eCFR text as amended at 89 FR 30040, Apr. 22, 2024)';
-
 export type DoeKind = 'liquid' | 'submersible' | 'lvdry' | 'mvdry';
 export type DoeLevels = 2016 | 2029;
 /** Basic impulse insulation level bands of the medium-voltage dry-type tables. */

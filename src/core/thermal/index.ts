@@ -4,8 +4,8 @@
  * largest steady load for a hot-spot limit. Cooling, method and paper arrive as
  * their typed unions; the cell declarations parse the text a user types.
  */
-import { agingRateSum, lifeFraction, referenceHotSpot, type Paper } from './aging';
-import { NORMAL_LIFE_HOURS, type Cooling, type ThermalCharacteristics, type ThermalMethod } from './coolingTable';
+import { agingRateSum, type Paper } from './aging';
+import type { Cooling, ThermalCharacteristics, ThermalMethod } from './coolingTable';
 import { maxSteadyLoad, steadyHotSpot, thermalModel } from './steadyState';
 import { checkProfile, hotSpotSeriesInto } from './transient';
 
@@ -78,58 +78,4 @@ export function equivalentAging(...args: AgingArgs): number {
 /** Insulation life consumed over the profile, Σ V·Δt, hours at the reference hot-spot. */
 export function lifeUsedHours(...args: AgingArgs): number {
   return agingSum(args) * args[2];
-}
-
-export interface LoadingYearOptions {
-  /** Step length, h (default 1). */
-  readonly stepHours?: number;
-  /** ONAN by default. */
-  readonly cooling?: Cooling;
-  /** IEEE by default. */
-  readonly method?: ThermalMethod;
-  /** upgraded by default (110 °C reference); normal has the 98 °C reference. */
-  readonly paper?: Paper;
-  /** The unit's rated top-oil rise, hot-spot gradient (K) and loss ratio; absent: the table's. */
-  readonly topOilRise?: number;
-  readonly hotSpotGradient?: number;
-  readonly lossRatio?: number;
-}
-
-export interface LoadingYear {
-  /** End-of-step hot-spot temperature, °C, one per step. */
-  readonly hotSpots: Float64Array;
-  readonly peakHotSpot: number;
-  /** F_EQA over the profile. */
-  readonly equivalentAging: number;
-  /** Life consumed, hours at the reference hot-spot. */
-  readonly lifeUsedHours: number;
-  /** lifeUsedHours over the normal life. */
-  readonly lifeFraction: number;
-  readonly normalLifeHours: number;
-  readonly paper: Paper;
-  readonly referenceHotSpot: number;
-  /** The thermal characteristics used, with their source. */
-  readonly model: ThermalCharacteristics;
-}
-
-/** One unit over a profile (a year of 8,760 hourly loads, or any count): everything at once. */
-export function loadingYear(loads: Float64Array, ambients: Float64Array, options: LoadingYearOptions = {}): LoadingYear {
-  const stepHours = options.stepHours ?? 1;
-  const model = thermalModel(options.cooling ?? 'ONAN', options.method ?? 'IEEE', options.topOilRise, options.hotSpotGradient, options.lossRatio);
-  const paper = options.paper ?? 'upgraded';
-  const hotSpots = profileHotSpots(model, loads, ambients, stepHours);
-  let peak = -Infinity;
-  for (let i = 0; i < hotSpots.length; i++) if (hotSpots[i]! > peak) peak = hotSpots[i]!;
-  const used = agingRateSum(hotSpots, paper) * stepHours;
-  return {
-    hotSpots,
-    peakHotSpot: peak,
-    equivalentAging: used / (stepHours * hotSpots.length),
-    lifeUsedHours: used,
-    lifeFraction: lifeFraction(used, NORMAL_LIFE_HOURS),
-    normalLifeHours: NORMAL_LIFE_HOURS,
-    paper,
-    referenceHotSpot: referenceHotSpot(paper),
-    model,
-  };
 }
