@@ -2,7 +2,7 @@
  * Short-circuit duty of a transformer (IEC 60076-5): the asymmetrical peak current the windings
  * must withstand mechanically, and the winding temperature reached by the thermal duty.
  */
-import { NoAnswerError, shown } from './errors';
+import { InputError, NoAnswerError, shown } from './errors';
 import { faultCurrent } from './current';
 import { perUnitImpedance, positive, positiveAtMost, within } from './guards';
 
@@ -85,6 +85,9 @@ export function peakShortCircuitCurrent(
   const rt = zt / Math.sqrt(1 + xrT * xrT);
   let r = rt;
   let x = rt * xrT;
+  if (sourceMva === undefined && sourceXOverR !== undefined) {
+    throw new InputError('source_x_r', 'is given without source_mva; give the supply\'s short-circuit power too, or leave both blank for an infinite source');
+  }
   if (sourceMva !== undefined) {
     const zs = kva / (sourceMva * 1000);
     if (sourceXOverR === undefined) {

@@ -27,6 +27,9 @@ describe('short circuit', () => {
     expect(peakFactor(2)).toBeGreaterThan(peakFactor(1));
     expect(peakFactor(14.0001)).toBeCloseTo(2.5456, 4);
   });
+  it('a source X/R without a source is refused', () => {
+    expect(() => peakShortCircuitCurrent(1000, 480, 0.0575, 5, undefined, 10, 3)).toThrow(/argument source_x_r: is given without source_mva/);
+  });
   it('a stiffer source gives a larger peak', () => {
     const weak = peakShortCircuitCurrent(1000, 480, 0.0575, 5, 50, 10, 3);
     const stiff = peakShortCircuitCurrent(1000, 480, 0.0575, 5, 500, 10, 3);
