@@ -3,7 +3,7 @@
  * package and office-addin-manifest's validator posts the manifest to a web service, so this
  * checks by hand what the schemas require of an add-in-only manifest for Excel custom functions.
  *
- * What the checks rest on (stored copies read with the project's search tool):
+ * What the checks rest on (docs/references.md, Add-in manifest and function metadata):
  * - "How to find the proper order of manifest elements",
  *   https://learn.microsoft.com/office/dev/add-ins/develop/manifest-element-ordering — the order of
  *   the children of <OfficeApp xsi:type="TaskPaneApp">.

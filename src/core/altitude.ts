@@ -3,8 +3,8 @@
  * IEEE (C57.12.00 / C57.91 for liquid-immersed, C57.12.01 for dry-type): the kVA rating is
  * reduced by a fixed share for every 100 m above 1000 m. IEC 60076-2: the temperature-rise limits
  * are reduced instead, by 1 K for every 400 m above 1000 m with natural air cooling (..AN) and
- * every 250 m with forced air (..AF) — as quoted at ask.abb.com, "How does altitude affect
- * transformer performance?".
+ * every 250 m with forced air (..AF). Sources and their status: docs/references.md, Test reports
+ * and short circuit.
  */
 import { NotInTableError } from './errors';
 import { within } from './guards';
@@ -17,9 +17,8 @@ const BASE_ALTITUDE_M = 1000;
 
 /**
  * Per cent of rated kVA lost for every 100 m above 1000 m (IEEE). Liquid-immersed: self-cooled
- * 0.4, forced-air and forced-oil 0.5 (from memory). Dry-type: self-cooled 0.3 (as stated by the
- * dry-type transformer FAQs of trcsupport.eaton.com and hammondpowersolutions.com), forced-air
- * 0.5 (from memory).
+ * 0.4, forced-air and forced-oil 0.5 (from memory). Dry-type: self-cooled 0.3 (confirmed in
+ * manufacturers' statements, docs/references.md), forced-air 0.5 (from memory).
  */
 const IEEE_KVA_PERCENT_PER_100M: Readonly<Record<AltitudeCooling, number>> = {
   ONAN: 0.4,

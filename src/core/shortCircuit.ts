@@ -105,9 +105,8 @@ export function peakShortCircuitCurrent(
 export type WindingMaterial = 'Cu' | 'Al';
 
 /**
- * IEC 60076-5 thermal ability to withstand short circuit (from memory, confirmed for copper by
- * the formula as quoted at industrialmonitordirect.com, "IEC 60076-5 transformer thermal damage
- * curve"): the average winding temperature after a short circuit of t seconds at current density
+ * IEC 60076-5 thermal ability to withstand short circuit (the copper formula confirmed in a
+ * secondary source, the aluminium constants from memory; docs/references.md): the average winding temperature after a short circuit of t seconds at current density
  * J (A/mm², rms symmetrical) from an initial θ0, heat taken up by the conductor alone:
  *   copper     θ1 = θ0 + 2·(θ0 + 235) / (106 000 / (J²·t) − 1)
  *   aluminium  θ1 = θ0 + 2·(θ0 + 225) / (45 700 / (J²·t) − 1)
@@ -119,9 +118,8 @@ const THERMAL_CONSTANTS: Readonly<Record<WindingMaterial, { readonly tk: number;
 
 /**
  * The highest permissible average winding temperature after the short circuit, oil-immersed
- * units with thermal class 105 insulation: 250 °C copper, 200 °C aluminium (IEC 60076-5; the
- * 250/200 °C pair is quoted at 3.107.25.168/drifting_heath/iec-60076-5, the 250 °C copper limit
- * "per Table 3" at industrialmonitordirect.com).
+ * units with thermal class 105 insulation: 250 °C copper, 200 °C aluminium (IEC 60076-5, as
+ * secondary sources quote it; docs/references.md, Test reports and short circuit).
  */
 export const SHORT_CIRCUIT_LIMIT_C: Readonly<Record<WindingMaterial, number>> = { Cu: 250, Al: 200 };
 

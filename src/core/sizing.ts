@@ -21,10 +21,9 @@ export interface RatingSeries {
  * of a rating of the three-phase series below, rounded to the kVA — a bank of three single-phase
  * units makes that three-phase rating (common practice) — so 20 000 kVA (a third of 60 000) is a
  * rating and 20 833 is not. The distribution sizes 10 … 833 kVA, 667 included, are the kVA rows of
- * the DOE single-phase tables of 10 CFR 431.196. The secondary source
- * electrical-engineering-portal.com/electrical-thumb-rules-you-must-follow-part-5 prints the
- * larger ones as 1.25, 1.66, 2.5, 3.33, 5.0, 6.6, 8.3, 10, 12.5, 16.6, 20.8 (sic), 25, 33.33
- * thousand kVA, and leaves out 667.
+ * the DOE single-phase tables of 10 CFR 431.196. The secondary source of the series
+ * (docs/references.md, Currents) prints the larger ones as 1.25, 1.66, 2.5, 3.33, 5.0, 6.6, 8.3,
+ * 10, 12.5, 16.6, 20.8 (sic), 25, 33.33 thousand kVA, and leaves out 667.
  */
 const US_SINGLE_PHASE: readonly number[] = [
   5, 10, 15, 25, 37.5, 50, 75, 100, 167, 250, 333, 500, 667, 833, 1250, 1667, 2500, 3333, 5000, 6667, 8333, 10000,
@@ -66,13 +65,13 @@ export const RATING_SERIES: Readonly<Record<RatingSeriesId, RatingSeries>> = {
   US1: {
     id: 'US1',
     title: 'IEEE C57.12.00 single-phase',
-    source: 'IEEE C57.12.00 preferred kVA ratings, single-phase (from memory; secondary source electrical-engineering-portal.com, electrical thumb rules part 5)',
+    source: 'IEEE C57.12.00 preferred kVA ratings, single-phase: thirds of the three-phase series (from memory; secondary source in docs/references.md, Currents)',
     ratingsKva: US_SINGLE_PHASE,
   },
   US3: {
     id: 'US3',
     title: 'IEEE C57.12.00 three-phase',
-    source: 'IEEE C57.12.00 preferred kVA ratings, three-phase (from memory; secondary source electrical-engineering-portal.com, electrical thumb rules part 5)',
+    source: 'IEEE C57.12.00 preferred kVA ratings, three-phase (from memory; secondary source in docs/references.md, Currents)',
     ratingsKva: US_THREE_PHASE,
   },
   IEC: {

@@ -2,8 +2,8 @@
  * Function names as a file stores them and as the engine reads them.
  *
  * Excel saves a call to an add-in function under a `_xldudf_` name with the namespace dot turned
- * into an underscore: `=XFMR.EFF(B2, …)` is stored as `_xldudf_XFMR_EFF(B2, …)` (DESIGN.md,
- * "Platform facts"). Functions added after the original file format are stored with an `_xlfn.`
+ * into an underscore: `=XFMR.EFF(B2, …)` is stored as `_xldudf_XFMR_EFF(B2, …)` (from memory;
+ * docs/references.md, Workbook format). Functions added after the original file format are stored with an `_xlfn.`
  * prefix (some with `_xlfn._xlws.`), e.g. `_xlfn.STDEV.S` ("Formulas added in Excel 2010 and
  * later", rust_xlsxwriter docs, rustxlsxwriter.github.io/formulas/future_functions.html; the
  * `_xlws.` part from memory). The engine knows such functions by their plain names.

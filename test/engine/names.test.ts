@@ -1,4 +1,4 @@
-/** Function names between Excel's stored form and the engine's (DESIGN.md, "Platform facts"). */
+/** Function names between Excel's stored form and the engine's (docs/references.md, Workbook format). */
 import { describe, expect, it } from 'vitest';
 import { catalog } from '../../src/cells/catalog';
 import { callsOurFunctions, storedName, toEngineFormula, toStoredFormula } from '../../src/engine/names';

@@ -11,7 +11,7 @@ import { adapt, CellError, plainErrors } from '../../src/cells/adapter';
 import { catalog } from '../../src/cells/catalog';
 import type { ArgDecl, CellFunctionDecl } from '../../src/cells/declaration';
 
-/** Calls per run, shared out over the catalog: the issue asks for at least 100,000 in total. */
+/** Calls per run, shared out over the catalog: at least 100,000 in total. */
 export const TOTAL_CALLS = 100_000;
 const runsEach = Math.ceil(TOTAL_CALLS / catalog.length);
 

@@ -2,8 +2,8 @@
 import { describe, expect, it } from 'vitest';
 import { harmonicLossFactor, kFactor } from '../../src/core/harmonics';
 
-// Source: worked K-factor table for a six-pulse spectrum, read in a stored copy of a derating
-// calculation sheet (reached at websiteproxy.net; original publisher not identified): harmonic
+// Source: worked K-factor table for a six-pulse spectrum in a derating calculation sheet whose
+// publisher is not identified (docs/references.md, Losses): harmonic
 // numbers 1, 5, 7, 11, 13, 17, 19, 23, 25 with Ih/I1 = 1, 0.200, 0.140, 0.091, 0.077, 0.058,
 // 0.056, 0.043, 0.040; Σ (Ih/I1)² = 1.0838, I = 1.0410 (rms), "k-factor = 8.3476" from
 // Σ (Ih/I)²·h² with the currents per unit of the rms current.

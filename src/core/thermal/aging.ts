@@ -2,7 +2,7 @@
  * Insulation aging as a function of hot-spot temperature θh (°C).
  *  - Thermally upgraded paper, reference 110 °C: the aging acceleration factor
  *    F_AA = exp(15000/383 − 15000/(θh + 273)) (IEEE C57.91 clause 5; IEC 60076-7 gives the same
- *    relative aging rate for upgraded paper; from memory, see REFERENCES.md).
+ *    relative aging rate for upgraded paper; from memory, docs/references.md).
  *  - Normal (non-upgraded) kraft paper, reference 98 °C: V = 2^((θh − 98)/6), doubling every 6 K
  *    (IEC 60076-7, from memory).
  * Over a profile, the equivalent aging F_EQA = Σ V_n·Δt_n / Σ Δt_n, and the life consumed is

@@ -8,9 +8,9 @@
  *   hot-spot rise Δθh = Hgr · K^y                           IEEE: Δθ_H,R · K^(2m)
  * so a row stores the oil exponent x (= IEEE n) and the winding exponent y (= IEEE 2m).
  *
- * Sources and their status (see REFERENCES.md):
+ * Sources and their status (docs/references.md, Loading and aging):
  *  - IEC rows: IEC 60076-7 Table 4, recommended thermal characteristics for the exponential
- *    equations, from memory (the search tool held no copy of the table). The rows are internally
+ *    equations, from memory. The rows are internally
  *    consistent: each reaches 98 °C hot-spot at rated load and 20 °C ambient (20 + Δθor + Hgr),
  *    which the tests check.
  *  - IEEE rows: exponents n and m from the IEEE C57.91 table of exponents for the temperature
@@ -146,7 +146,7 @@ export function thermalCharacteristics(method: ThermalMethod, cooling: Cooling):
 /**
  * Normal insulation life of a well-dried, oxygen-free thermally upgraded paper system at the
  * 110 °C reference hot-spot, by end-of-life criterion: the table IEEE C57.91 and IEC 60076-7 both
- * give (confirmed, per REFERENCES.md, in a transformer-life article quoting the IEC 60076-7 table).
+ * give (confirmed in a transformer-life article quoting the IEC 60076-7 table; docs/references.md).
  */
 export const NORMAL_INSULATION_LIFE: readonly { readonly criterion: string; readonly hours: number }[] = [
   { criterion: '50 % retained tensile strength of insulation', hours: 65_000 },
