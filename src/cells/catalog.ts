@@ -15,6 +15,7 @@ import * as ratio from './functions/ratio';
 import * as regulation from './functions/regulation';
 import * as rules from './functions/rules';
 import * as sizing from './functions/sizing';
+import * as testReports from './functions/testReports';
 import * as thermal from './functions/thermal';
 
 // COMPLIES (compliance) stays last: it checks a unit against the rules listed just before it.
@@ -31,6 +32,7 @@ const groups: Record<string, CellFunctionDecl>[] = [
   cost,
   regulation,
   rules,
+  testReports,
   compliance,
 ];
 

@@ -25,10 +25,13 @@ import {
   YEAR_BLOCKS,
   YEAR_CELLS,
   YEAR_THERMAL_DATA,
+  measuredRatio,
   YEAR_UNIT,
   yearOfAmbients,
   yearOfLoads,
 } from '../../src/demo';
+import { turnsRatio } from '../../src/core/ratio';
+import { withinTolerance, type TestItem } from '../../src/core/testReport';
 import { loadLossWorth, noLoadLossWorth, totalOwningCost } from '../../src/core/cost';
 import { doeMinimumEfficiency, meetsEfficiencyRule } from '../../src/core/efficiencyRules';
 import { cyclicMax, hotSpotAfterStep, loadingYear, maxSteadyLoad, overloadTime, profileCheck, steadyHotSpot, thermalModel } from '../../src/core/thermal';
@@ -115,6 +118,31 @@ describe('the Fernhill Works demo', () => {
     expect(text).toMatch(/2 of 14 units fail/);
     expect(text).toMatch(/FH-04/);
     expect(text).toMatch(/verify with a qualified engineer/);
+  });
+
+  it('checks each unit’s test report against its guarantee with one spilling formula per column, as the cores do', async () => {
+    const results = recalculate(await loadWorkbook(readFileSync(summary.files[0]!)));
+    const c = FLEET_COLUMNS;
+    const spill = (col: string) => {
+      const r = results.find((x) => x.cell === `${col}2`)!;
+      expect(r.formula).toMatch(/^=?XFMR\.TEST(OK|TOL)\(/);
+      expect(r.spill?.ref).toBe(`${col}2:${col}${FLEET.length + 1}`);
+      return r.spill!.values.map((row) => row[0]);
+    };
+    const ok = (measured: number, guaranteed: number, item: TestItem, z?: number) => withinTolerance(measured, guaranteed, item, 'IEC', z, 'two-winding');
+    expect(spill(c.p0Accepted)).toEqual(FLEET.map((u) => ok(u.p0W, u.guaranteed.p0W, 'no-load loss')));
+    expect(spill(c.pkAccepted)).toEqual(FLEET.map((u) => ok(u.pkW, u.guaranteed.pkW, 'load loss')));
+    expect(spill(c.totalAccepted)).toEqual(FLEET.map((u) => ok(u.p0W + u.pkW, u.guaranteed.p0W + u.guaranteed.pkW, 'total loss')));
+    expect(spill(c.zAccepted)).toEqual(FLEET.map((u) => ok(u.z, u.guaranteed.z, 'impedance')));
+    expect(spill(c.ratioAccepted)).toEqual(FLEET.map((u) => ok(measuredRatio(u), turnsRatio(u.hvV, u.lvV, u.vectorGroup), 'ratio', u.z)));
+    (spill(c.totalLimit) as number[]).forEach((limit, i) => expect(limit).toBeCloseTo((FLEET[i]!.guaranteed.p0W + FLEET[i]!.guaranteed.pkW) * 1.1, 8));
+    // The invented guarantees show each kind of outcome: all pass, components pass but not the total,
+    // losses fail, impedance fails, one component fails with the total passing.
+    const failing = (col: string) => FLEET.filter((_, i) => spill(col)[i] === false).map((u) => u.id);
+    expect(failing(c.totalAccepted)).toEqual(['FH-02', 'FH-07']);
+    expect(failing(c.p0Accepted)).toEqual(['FH-07', 'FH-14']);
+    expect(failing(c.zAccepted)).toEqual(['FH-10']);
+    expect(failing(c.ratioAccepted)).toEqual(['FH-04', 'FH-10']);
   });
 
   it('the year’s hot-spot, aging and life used are those of the thermal core on the same loads and ambients', async () => {
