@@ -8,6 +8,7 @@ import { cpus } from 'node:os';
 import { adapterOverhead } from './adapter';
 import { agingBenchmark } from './aging';
 import { bundleSize } from './bundle';
+import { calcBenchmark } from './calc';
 import { cyclicBenchmark } from './cyclic';
 import { fleetBenchmark } from './fleet';
 import { printTable } from './harness';
@@ -20,7 +21,8 @@ async function main(): Promise<void> {
   const adapter = await adapterOverhead();
   const aging = await agingBenchmark();
   const cyclic = await cyclicBenchmark();
-  const rows = [...fleet.rows, ...adapter, ...aging, ...cyclic, bundleSize()];
+  const calc = await calcBenchmark();
+  const rows = [...calc, ...fleet.rows, ...adapter, ...aging, ...cyclic, bundleSize()];
   console.log('');
   printTable(rows);
   const missed = rows.filter((r) => !r.met);

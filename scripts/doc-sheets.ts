@@ -5,7 +5,8 @@
  * workbook: one engine build instead of a hundred keeps `npm run docs` and its test fast.
  */
 import { DetailedCellError, type RawCellContent } from 'hyperformula';
-import { arraySize, createEngine, type Sheets } from '../src/engine/engine';
+import { createEngine, type Sheets } from '../src/engine/engine';
+import { arraySize } from '../src/engine/internals';
 
 /** A formula typed into one cell of a doc sheet. */
 export interface DocFormula {

@@ -2,7 +2,8 @@
 import { promises as fs } from 'node:fs';
 import { join } from 'node:path';
 import { SAFETY_NOTE } from '../cells/metadata';
-import type { FormulaResult, JsonValue } from '../engine/xlsx';
+import type ExcelJS from 'exceljs';
+import { calculateWorkbook, type Calculated, type FormulaResult, type JsonValue } from '../engine/xlsx';
 import {
   BID_CELLS,
   bidWorkbook,
@@ -19,7 +20,6 @@ import {
   YEAR_UNIT,
   yearWorkbook,
 } from '../demo';
-import { recalculateAndSave } from './calc';
 import { checkOutput, writeAtomically } from './files';
 
 export const FLEET_FILE = 'fernhill-fleet.xlsx';
@@ -62,18 +62,22 @@ function valueAt(results: FormulaResult[], sheet: string, cell: string): JsonVal
   return results.find((x) => x.sheet === sheet && x.cell === cell)?.value;
 }
 
+/** Writes a demo workbook as exceljs lays it out, recalculated by the engine as `fluxbook calc` does. */
+async function recalculated(workbook: ExcelJS.Workbook, file: string, overwrite: boolean): Promise<Calculated> {
+  const calculated = await calculateWorkbook(Buffer.from(await workbook.xlsx.writeBuffer()));
+  await writeAtomically(file, (tmp) => fs.writeFile(tmp, calculated.bytes), { overwrite });
+  return calculated;
+}
+
 export async function demo(options: DemoOptions): Promise<DemoSummary> {
   await fs.mkdir(options.out, { recursive: true });
   const overwrite = Boolean(options.overwrite);
   const files = [join(options.out, FLEET_FILE), join(options.out, YEAR_FILE), join(options.out, BIDS_FILE)];
   for (const f of files) await checkOutput(f, { overwrite });
 
-  const fleet = fleetWorkbook();
-  const fleetCalc = await recalculateAndSave(fleet, () => writeAtomically(files[0]!, (tmp) => fleet.xlsx.writeFile(tmp), { overwrite }));
-  const year = yearWorkbook();
-  const yearCalc = await recalculateAndSave(year, () => writeAtomically(files[1]!, (tmp) => year.xlsx.writeFile(tmp), { overwrite }));
-  const bids = bidWorkbook();
-  const bidCalc = await recalculateAndSave(bids, () => writeAtomically(files[2]!, (tmp) => bids.xlsx.writeFile(tmp), { overwrite }));
+  const fleetCalc = await recalculated(fleetWorkbook(), files[0]!, overwrite);
+  const yearCalc = await recalculated(yearWorkbook(), files[1]!, overwrite);
+  const bidCalc = await recalculated(bidWorkbook(), files[2]!, overwrite);
 
   const c = FLEET_COLUMNS;
   const rows = FLEET.map((u, i) => ({

@@ -74,16 +74,47 @@ async function exists(path: string): Promise<boolean> {
   }
 }
 
-/** Checks an output path before any work: its folder exists, and it is not a file we may not replace. */
+/** The sentence for a file-system refusal of `path`, or undefined when the error is not one a user can act on. */
+export function fileProblem(path: string, error: unknown): string | undefined {
+  const code = (error as NodeJS.ErrnoException).code;
+  if (code === 'EACCES' || code === 'EPERM' || code === 'EROFS') return `${path}: cannot be written here (permission denied); choose a folder you may write to`;
+  if (code === 'EISDIR') return `${path}: is a folder; give a file name for the output, such as ${join(path, 'recalculated.xlsx')}`;
+  if (code === 'ENOSPC') return `${path}: the disk is full; nothing was written`;
+  if (code === 'ENOTDIR') return `${path}: a part of this path is a file, not a folder`;
+  if (code === 'ENAMETOOLONG') return `${path}: the name is too long`;
+  return undefined;
+}
+
+/** The nearest part of `path` that exists, and what it is. */
+async function nearestExisting(path: string): Promise<{ path: string; isFolder: boolean } | undefined> {
+  for (let p = path; ; p = dirname(p)) {
+    try {
+      return { path: p, isFolder: (await fs.stat(p)).isDirectory() };
+    } catch {
+      if (dirname(p) === p) return undefined;
+    }
+  }
+}
+
+/** Checks an output path before any work: its folder exists and may be written, and it is not a file we may not replace. */
 export async function checkOutput(out: string, options: { overwrite: boolean; notSameAs?: string }): Promise<void> {
   if (options.notSameAs !== undefined && (await sameFile(options.notSameAs, out))) {
     throw new UsageError(`${out}: is the input workbook; Fluxbook never writes over its input — give another --out`);
   }
-  const folder = dirname(resolve(out));
+  const full = resolve(out);
+  const folder = dirname(full);
+  const near = await nearestExisting(folder);
+  if (near && !near.isFolder) throw new UsageError(`${out}: ${near.path} is a file, not a folder, so nothing can be written inside it`);
+  if (!near || near.path !== folder) throw new UsageError(`${out}: the folder ${folder} does not exist`);
   try {
-    if (!(await fs.stat(folder)).isDirectory()) throw new Error();
-  } catch {
-    throw new UsageError(`${out}: the folder ${folder} does not exist`);
+    if ((await fs.stat(full)).isDirectory()) throw new UsageError(fileProblem(out, Object.assign(new Error(), { code: 'EISDIR' }))!);
+  } catch (error) {
+    if (error instanceof UsageError) throw error;
+  }
+  try {
+    await fs.access(folder, fsc.W_OK);
+  } catch (error) {
+    throw new UsageError(fileProblem(out, error) ?? `${out}: ${reason(error)}`);
   }
   if (!options.overwrite && (await exists(out))) {
     throw new UsageError(`${out}: exists already; give --overwrite to replace it, or another name`);
@@ -93,8 +124,16 @@ export async function checkOutput(out: string, options: { overwrite: boolean; no
 let pendingTemps = new Set<string>();
 let handlersInstalled = false;
 
-/** On Ctrl-C or a polite kill, remove the temp files of writes under way (a SIGKILL leaves one behind, never a half output). */
-function installSignalHandlers(): void {
+/** What the command does before it exits on a signal (the progress bar gives the terminal back). */
+let beforeSignalExit: () => void = () => {};
+
+/**
+ * On Ctrl-C or a polite kill: give the terminal back, remove the temp files of writes under way,
+ * say so, and exit 130 (SIGINT) or 143 (SIGTERM); a SIGKILL leaves one temp file behind, never a
+ * half output.
+ */
+export function installSignalHandlers(onExit: () => void = () => {}): void {
+  beforeSignalExit = onExit;
   if (handlersInstalled) return;
   handlersInstalled = true;
   for (const [signal, code] of [
@@ -102,6 +141,11 @@ function installSignalHandlers(): void {
     ['SIGTERM', 143],
   ] as const) {
     process.on(signal, () => {
+      try {
+        beforeSignalExit();
+      } catch {
+        // the terminal is given back as far as possible
+      }
       for (const tmp of pendingTemps) {
         try {
           unlinkSync(tmp);
@@ -110,6 +154,7 @@ function installSignalHandlers(): void {
         }
       }
       pendingTemps = new Set();
+      process.stderr.write(`fluxbook: ${signal === 'SIGINT' ? 'interrupted' : 'stopped'}; nothing written\n`);
       process.exit(code);
     });
   }
@@ -121,22 +166,32 @@ function installSignalHandlers(): void {
  * fails rather than replace a file that appeared meanwhile (a rename where links are not possible).
  */
 export async function writeAtomically(target: string, write: (tmp: string) => Promise<void>, options: { overwrite: boolean }): Promise<void> {
-  installSignalHandlers();
+  installSignalHandlers(beforeSignalExit);
   const full = resolve(target);
   const tmp = join(dirname(full), `${TEMP_PREFIX}${process.pid}-${randomBytes(4).toString('hex')}-${basename(full)}`);
   pendingTemps.add(tmp);
   try {
-    await write(tmp);
+    try {
+      await write(tmp);
+    } catch (error) {
+      const problem = fileProblem(target, error);
+      throw problem ? new UsageError(problem) : error;
+    }
     const handle = await fs.open(tmp, fsc.O_RDONLY);
     try {
       await handle.sync();
     } finally {
       await handle.close();
     }
-    if (options.overwrite) {
-      await fs.rename(tmp, full);
-    } else {
-      await linkWithoutReplacing(tmp, full);
+    try {
+      if (options.overwrite) {
+        await fs.rename(tmp, full);
+      } else {
+        await linkWithoutReplacing(tmp, full);
+      }
+    } catch (error) {
+      const problem = error instanceof UsageError ? undefined : fileProblem(target, error);
+      throw problem ? new UsageError(problem) : error;
     }
     await syncFolder(dirname(full));
   } finally {

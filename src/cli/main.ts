@@ -6,24 +6,31 @@
 import { Command, CommanderError } from 'commander';
 import packageJson from '../../package.json';
 import { SAFETY_NOTE } from '../cells/metadata';
-import type { FormulaResult } from '../engine/xlsx';
-import { calc } from './calc';
+import { calc, type CalcSummary } from './calc';
 import { demo, formatDemoSummary } from './demo';
-import { UsageError } from './files';
+import { installSignalHandlers, UsageError } from './files';
+import { restoreTerminal } from './progress';
 
 /** The version npm publishes, read from package.json so the two cannot differ. */
 const VERSION = packageJson.version;
 
-/** What the error values of a run are, where two kinds say more than a count: cycles and unknown names. */
-function errorKinds(results: FormulaResult[]): string {
-  const code = (r: FormulaResult) => (r.value !== null && typeof r.value === 'object' ? r.value.error : undefined);
-  const cycles = results.filter((r) => code(r) === '#CYCLE!').length;
-  const names = results.filter((r) => code(r) === '#NAME?').length;
-  const kinds = [
-    cycles > 0 ? `${cycles} in a circular reference (#CYCLE!, stored as #VALUE!)` : '',
-    names > 0 ? `${names} naming a function that does not exist (#NAME?)` : '',
-  ].filter(Boolean);
-  return kinds.length > 0 ? ` (${kinds.join('; ')}; --json shows each)` : '';
+/** Known error codes and what they mean, for the summary line. */
+const CODE_NOTES: Record<string, string> = {
+  '#CYCLE!': 'a circular reference, stored as #VALUE!',
+  '#NAME?': 'a function or name that does not exist here',
+  '#SPILL!': 'a result with no room to spill, stored as #VALUE!',
+  '#ERROR!': 'a formula that could not be read, stored as #VALUE!',
+};
+
+/** One line that sums a run up: formulas, XFMR formulas, and every error value by code (cells of spills included). */
+export function summaryLine(out: string, s: CalcSummary): string {
+  const head = `${out}: ${s.formulas} formula${s.formulas === 1 ? '' : 's'} recalculated (${s.ours} with XFMR functions)`;
+  if (s.errors === 0) return `${head}, no error values`;
+  const codes = Object.entries(s.errorCodes)
+    .sort((a, b) => b[1] - a[1])
+    .map(([code, n]) => `${n} ${code}${CODE_NOTES[code] ? ` (${CODE_NOTES[code]})` : ''}`)
+    .join(', ');
+  return `${head}, ${s.errors} error value${s.errors === 1 ? '' : 's'}: ${codes}; ${s.oursErrors} of them from XFMR formulas; --json shows each`;
 }
 
 function program(): Command {
@@ -40,29 +47,38 @@ function program(): Command {
   p.command('calc')
     .description('recalculate IN.xlsx and write its formulas with their computed values to a new workbook')
     .argument('<in>', 'the workbook to read (.xlsx); it is never written to')
-    .requiredOption('--out <file>', 'the workbook to write (.xlsx); must not be the input')
+    .argument('[out]', 'the workbook to write, as an alternative to --out')
+    .option('--out <file>', 'the workbook to write (.xlsx); must not be the input')
     .option('--json', 'print every formula cell as {sheet, cell, formula, value} on stdout')
-    .option('--overwrite', 'replace --out if it exists already')
+    .option('--values', 'write plain values instead of formulas (for spreadsheets without the add-in)')
+    .option('--strict', 'exit with 3 when any XFMR result is an error value (the workbook is still written)')
+    .option('--overwrite', 'replace the output if it exists already')
     .addHelpText(
       'after',
-      '\nCalls to XFMR functions are written the way Excel stores add-in calls (_xldudf_XFMR_EFF),\n' +
-        'so Excel with the Fluxbook add-in recalculates them; values are stored for Excel before the\n' +
-        'add-in loads and for other spreadsheets. A spilled result is stored as an array formula over\n' +
-        'its range. The output is written to a temporary file beside it and renamed when complete.\n' +
-        'A progress bar appears on stderr for workbooks of more than 50,000 formulas or a profile\n' +
-        'longer than 8,760 steps, when stderr is a terminal.\n' +
+      '\nThe output is the input package with new values: every part (charts, images, comments,\n' +
+        'tables, styles, extensions) is copied as it was; in the worksheets only the formula cells\n' +
+        'and the cells of spilled results are rewritten. Calls to XFMR functions are written the way\n' +
+        'Excel stores add-in calls (_xldudf_XFMR_EFF), so Excel with the Fluxbook add-in recalculates\n' +
+        'them. A spilled result is written as an Excel dynamic array. With --values every formula is\n' +
+        'replaced by its value. The output is written to a temporary file beside it and renamed when\n' +
+        'complete. A summary goes to stderr, with every error value counted. A progress bar appears on\n' +
+        'stderr for inputs of more than 1 MB when stderr is a terminal.\n' +
         'Refused before reading (exit 2): a package cut short, one that would unpack to more than\n' +
         '1 GiB (500 MiB a part) or unpacks past what it declares, and a workbook too large for the\n' +
-        'memory Node.js may use (NODE_OPTIONS=--max-old-space-size=MB allows more).',
+        'memory Node.js may use (NODE_OPTIONS=--max-old-space-size=MB allows more).\n' +
+        'Exit codes: 0 done; 2 refused; 3 with --strict, an XFMR result is an error value; 130 interrupted.',
     )
-    .action(async (input: string, opts: { out: string; json?: boolean; overwrite?: boolean }) => {
-      const summary = await calc(input, opts);
-      if (opts.json) {
-        process.stdout.write(`${JSON.stringify(summary.results, null, 1)}\n`);
-      } else {
-        const errors = summary.errors === 0 ? 'no errors' : `${summary.errors} with an error value${errorKinds(summary.results)}`;
-        process.stdout.write(`${opts.out}: ${summary.formulas} formulas recalculated (${summary.ours} with XFMR functions), ${errors}\n`);
+    .action(async (input: string, second: string | undefined, opts: { out?: string; json?: boolean; overwrite?: boolean; values?: boolean; strict?: boolean }) => {
+      if (second !== undefined && opts.out !== undefined) {
+        throw new UsageError(`unexpected argument "${second}": the output is given with --out (${opts.out}); give one workbook to read`);
       }
+      const out = opts.out ?? second;
+      if (out === undefined) throw new UsageError('no output given: add --out OUT.xlsx (or name it after the input: fluxbook calc IN.xlsx OUT.xlsx)');
+      installSignalHandlers(restoreTerminal);
+      const summary = await calc(input, { ...opts, out });
+      process.stderr.write(`${summaryLine(out, summary)}\n`);
+      if (opts.json && summary.json !== undefined) await writeStdout(`${summary.json}\n`);
+      if (opts.strict && summary.oursErrors > 0) exitCode = 3;
     });
 
   p.command('demo')
@@ -75,10 +91,32 @@ function program(): Command {
   return p;
 }
 
+let exitCode = 0;
+
+/** Writes to stdout; a reader that went away (`| head`) ends the output quietly, not the run. */
+function writeStdout(text: string): Promise<void> {
+  return new Promise((resolve) => {
+    process.stdout.write(text, () => resolve());
+  });
+}
+
+let pipeWatched = false;
+
+function quietOnClosedPipe(): void {
+  if (pipeWatched) return;
+  pipeWatched = true;
+  process.stdout.on('error', (error: NodeJS.ErrnoException) => {
+    if (error.code === 'EPIPE') process.exit(exitCode);
+    throw error;
+  });
+}
+
 export async function main(argv: string[]): Promise<number> {
+  exitCode = 0;
+  quietOnClosedPipe();
   try {
     await program().parseAsync(argv, { from: 'user' });
-    return 0;
+    return exitCode;
   } catch (error) {
     if (error instanceof CommanderError) {
       // Help and version end here too; commander has already printed what it had to say.

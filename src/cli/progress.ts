@@ -1,59 +1,79 @@
 /**
- * A progress bar on stderr for big workbooks (cli-progress); nothing at all when stderr is not a
- * terminal (a pipe, a log file, CI), so output stays clean.
+ * A progress bar on stderr for big workbooks (cli-progress), one stage after another — reading,
+ * calculating, writing — each with the share of its own work done; nothing at all when stderr is
+ * not a terminal (a pipe, a log file, CI), so output stays clean. The bar hides the cursor and
+ * turns line wrapping off while it is drawn; `restoreTerminal` gives both back, also on Ctrl-C.
  */
 import { SingleBar } from 'cli-progress';
 
-/** Workbooks this big take long enough to be worth a bar. */
-export const BAR_FORMULA_CELLS = 50_000;
-/** A profile longer than a year of hours. */
-export const BAR_PROFILE_STEPS = 8_760;
+/** Packages this big take long enough to be worth a bar (about 20,000 formula rows). */
+export const BAR_INPUT_BYTES = 1024 * 1024;
 
 export interface Progress {
-  stage(name: string, total: number): void;
-  tick(): void;
+  /** `done` of `total` in the stage named. */
+  update(stage: string, done: number, total: number): void;
   stop(): void;
 }
 
-const silent: Progress = { stage() {}, tick() {}, stop() {} };
+const silent: Progress = { update() {}, stop() {} };
 
-export function wantsBar(formulaCells: number, longestRange: number): boolean {
-  return formulaCells > BAR_FORMULA_CELLS || longestRange > BAR_PROFILE_STEPS;
+export function wantsBar(inputBytes: number): boolean {
+  return inputBytes > BAR_INPUT_BYTES;
+}
+
+/** Cursor shown, line wrapping on (DEC private modes 25 and 7). */
+export const RESTORE_TERMINAL = '\u001b[?25h\u001b[?7h';
+
+let active: { stream: NodeJS.WriteStream; bar: SingleBar } | undefined;
+
+/** Clears a bar that is drawn and gives the terminal its cursor and wrapping back. */
+export function restoreTerminal(): void {
+  if (!active) return;
+  const { stream, bar } = active;
+  active = undefined;
+  try {
+    bar.stop();
+  } finally {
+    stream.write(`\r\u001b[2K${RESTORE_TERMINAL}`);
+  }
 }
 
 export function progress(show: boolean, stream: NodeJS.WriteStream = process.stderr): Progress {
   if (!show || !stream.isTTY) return silent;
   const bar = new SingleBar({
     stream,
-    format: '{stage} [{bar}] {percentage}% | {value}/{total}',
+    format: '{stage} [{bar}] {percentage}%',
     hideCursor: true,
     clearOnComplete: true,
-    etaBuffer: 50,
+    linewrap: false,
+    fps: 10,
   });
   let started = false;
-  let value = 0;
-  let total = 1;
-  // Updating the bar on every cell would cost more than the cell; every 1/200th is enough.
-  let step = 1;
+  let current = '';
   return {
-    stage(name, n) {
-      value = 0;
-      total = Math.max(1, n);
-      step = Math.max(1, Math.floor(total / 200));
+    update(stage, done, total) {
+      const t = Math.max(1, Math.round(total));
+      const d = Math.min(t, Math.max(0, Math.round(done)));
       if (!started) {
-        bar.start(total, 0, { stage: name });
+        bar.start(t, d, { stage });
+        (bar as unknown as { render(force: boolean): void }).render(true);
+        active = { stream, bar };
         started = true;
+      } else if (stage !== current) {
+        bar.setTotal(t);
+        bar.update(d, { stage });
+        (bar as unknown as { render(force: boolean): void }).render(true); // a new stage shows at once, not at the next frame
       } else {
-        bar.setTotal(total);
-        bar.update(0, { stage: name });
+        if (bar.getTotal() !== t) bar.setTotal(t);
+        bar.update(d);
       }
-    },
-    tick() {
-      if (value < total) value++;
-      if (value % step === 0 || value === total) bar.update(value);
+      current = stage;
     },
     stop() {
-      if (started) bar.stop();
+      if (!started) return;
+      started = false;
+      if (active?.bar === bar) restoreTerminal();
+      else bar.stop();
     },
   };
 }

@@ -5,6 +5,7 @@
  */
 import { HyperFormula, type ConfigParams, type RawCellContent, type SerializedNamedExpression, type SimpleCellAddress } from 'hyperformula';
 import { registerCatalog, withSession, type CalcSession } from './functions';
+import { arraySize } from './internals';
 
 /** Excel's sheet size: 1,048,576 rows × 16,384 columns (XFD). */
 export const EXCEL_MAX_ROWS = 1_048_576;
@@ -80,18 +81,4 @@ export function evaluateFormula(formula: string, sheet: RawCellContent[][] = [])
   } finally {
     hf.destroy();
   }
-}
-
-/**
- * The size of the array a formula cell spills, 1×1 for a single value. HyperFormula has no public
- * call for this: it is read from the cell's vertex (hyperformula 3.5.0 ArrayFormulaVertex).
- */
-export function arraySize(hf: HyperFormula, address: SimpleCellAddress): { rows: number; cols: number } {
-  if (!hf.isCellPartOfArray(address)) return { rows: 1, cols: 1 };
-  const graph = (hf as unknown as { dependencyGraph: { getCell(a: SimpleCellAddress): unknown } }).dependencyGraph;
-  const vertex = graph.getCell(address) as { width?: number; height?: number; cellAddress?: SimpleCellAddress } | undefined;
-  if (vertex === undefined || typeof vertex.width !== 'number' || typeof vertex.height !== 'number') return { rows: 1, cols: 1 };
-  const corner = vertex.cellAddress;
-  if (corner === undefined || corner.row !== address.row || corner.col !== address.col) return { rows: 1, cols: 1 };
-  return { rows: vertex.height, cols: vertex.width };
 }

@@ -36,6 +36,7 @@ import {
 import { adapt, type CellFunction, type ErrorKind } from '../cells/adapter';
 import { catalog, formulaName } from '../cells/catalog';
 import type { CellFunctionDecl } from '../cells/declaration';
+import { formulaVertex, type PluginInternals, type State } from './internals';
 
 const ERROR_TYPE: Record<ErrorKind, ErrorType> = { VALUE: ErrorType.VALUE, NUM: ErrorType.NUM, NA: ErrorType.NA };
 
@@ -91,14 +92,7 @@ function toAdapterArgument(v: unknown): unknown {
   return toAdapterScalar(v);
 }
 
-type State = { formulaAddress: SimpleCellAddress; arraysFlag: boolean; formulaVertex?: unknown };
 type Ast = { args: unknown[] };
-interface PluginInternals {
-  evaluateAst(ast: unknown, state: State): unknown;
-  arraySizeForAst(ast: unknown, state: State): ArraySize;
-  runFunction(args: unknown[], state: State, metadata: FunctionMetadata, fn: (...a: unknown[]) => unknown): unknown;
-  dependencyGraph: { getCell(address: SimpleCellAddress): unknown };
-}
 
 /** The formula itself under ARRAYFORMULA(…) and parentheses, which do not change a result's size. */
 function unwrapped(ast: unknown): unknown {
@@ -112,11 +106,9 @@ function unwrapped(ast: unknown): unknown {
 
 /** The room HyperFormula reserved for the formula whose root is `ast`, or undefined when nested. */
 function reservedSize(plugin: PluginInternals, ast: unknown, address: SimpleCellAddress): { rows: number; cols: number } | undefined {
-  const vertex = plugin.dependencyGraph.getCell(address) as { formula?: unknown; width?: number; height?: number } | undefined;
+  const vertex = formulaVertex(plugin, address);
   if (vertex === undefined || unwrapped(vertex.formula) !== ast) return undefined;
-  return typeof vertex.width === 'number' && typeof vertex.height === 'number'
-    ? { rows: vertex.height, cols: vertex.width }
-    : { rows: 1, cols: 1 };
+  return { rows: vertex.rows, cols: vertex.cols };
 }
 
 function toHyperFormula(result: unknown[][]): unknown {
@@ -134,7 +126,7 @@ function eachSize(plugin: PluginInternals, decl: CellFunctionDecl, ast: Ast, sta
   let rows = 1;
   let cols = 1;
   const s = withArrays(state);
-  if (ast.args.length > decl.args.length) return ArraySize.scalar(); // refused: wrong number of arguments
+  if (argumentCountError(decl, ast.args.length)) return ArraySize.scalar(); // refused: wrong number of arguments
   for (let k = 0; k < ast.args.length; k++) {
     const a = decl.args[k]!;
     if (a.series) continue;
@@ -177,8 +169,24 @@ const sizeMismatch = (rows: number, cols: number, reserved: { rows: number; cols
     `the result is ${rows}×${cols} cells but ${reserved.rows}×${reserved.cols} were reserved when the formula was entered; enter the formula again`,
   );
 
-function evaluate(plugin: PluginInternals, fn: CellFunction, metadata: FunctionMetadata, ast: Ast, state: State): unknown {
+/** `XFMR.EFF(kva, p0_w, pk_w, [load], [pf])`: the call as its declaration has it, optional arguments in brackets. */
+export function signature(decl: CellFunctionDecl): string {
+  return `${formulaName(decl)}(${decl.args.map((a) => (a.optional ? `[${a.name}]` : a.name)).join(', ')})`;
+}
+
+/** One #VALUE! for a call with too few or too many arguments, naming the function's signature. */
+function argumentCountError(decl: CellFunctionDecl, given: number): CellError | undefined {
+  const required = decl.args.filter((a) => !a.optional).length;
+  const most = decl.args.length;
+  if (given >= required && given <= most) return undefined;
+  const takes = required === most ? `${most}` : `${required} to ${most}`;
+  return new CellError(ErrorType.VALUE, `${formulaName(decl)} takes ${takes} argument${most === 1 ? '' : 's'}, ${signature(decl)}; ${given} ${given === 1 ? 'was' : 'were'} given`);
+}
+
+function evaluate(plugin: PluginInternals, decl: CellFunctionDecl, fn: CellFunction, metadata: FunctionMetadata, ast: Ast, state: State): unknown {
   session?.called?.();
+  const wrongCount = argumentCountError(decl, ast.args.length);
+  if (wrongCount) return wrongCount;
   return plugin.runFunction(ast.args, state, metadata, (...values: unknown[]) => {
     const result = fn(...values.map(toAdapterArgument));
     const rows = result.length;
@@ -209,19 +217,22 @@ export function buildPlugin(decls: readonly CellFunctionDecl[]): FunctionPluginD
     const metadata: FunctionMetadata = {
       method,
       sizeOfResultArrayMethod: `${method}_size`,
-      // Every argument may be left out as far as HyperFormula is concerned: the adapter applies the
-      // defaults and names a missing required argument in its message.
-      parameters: decl.args.map(() => ({ argumentType: FunctionArgumentType.ANY, optionalArg: true })),
+      // Every argument may be left out, and more may be given, as far as HyperFormula is concerned:
+      // the count is checked against the declaration (argumentCountError), and the adapter applies
+      // the defaults and names a blank required argument in its message.
+      parameters: [...decl.args.map(() => ({ argumentType: FunctionArgumentType.ANY, optionalArg: true })), { argumentType: FunctionArgumentType.ANY, optionalArg: true }],
+      repeatLastArgs: 1,
       vectorizationForbidden: true, // we broadcast ourselves, with our messages
       enableArrayArithmeticForArguments: true,
     };
     implemented[formulaName(decl)] = metadata;
     const fn = adapt(decl, hyperFormulaError, { isError: (v) => v instanceof CellError });
     proto[method] = function (this: PluginInternals, ast: Ast, state: State) {
-      return evaluate(this, fn, metadata, ast, state);
+      return evaluate(this, decl, fn, metadata, ast, state);
     };
     proto[`${method}_size`] = function (this: PluginInternals, ast: Ast, state: State) {
-      return decl.kind === 'each' ? eachSize(this, decl, ast, state) : blockSize(this, fn, ast, state);
+      if (decl.kind === 'each') return eachSize(this, decl, ast, state);
+      return argumentCountError(decl, ast.args.length) ? ArraySize.scalar() : blockSize(this, fn, ast, state);
     };
   }
   (FluxbookPlugin as unknown as { implementedFunctions: ImplementedFunctions }).implementedFunctions = implemented;

@@ -29,7 +29,7 @@ for (const decl of catalog) {
 }
 
 /** Runs `edit` on the parts of a formula outside "string literals" and 'quoted sheet names'. */
-function outsideQuotes(formula: string, edit: (code: string) => string): string {
+export function outsideQuotes(formula: string, edit: (code: string) => string): string {
   let out = '';
   let i = 0;
   while (i < formula.length) {
@@ -77,11 +77,18 @@ function unknownOfOurs(rest: string): string | undefined {
   return rest.toUpperCase().startsWith(prefix) && rest.length > prefix.length ? formulaName(rest.slice(prefix.length).toUpperCase()) : undefined;
 }
 
+/**
+ * Another add-in's `_xldudf_…` call as a name the engine parses and does not know, so that cell
+ * alone gets #NAME? (and formulas reading it the error value), not a parse error: XLDUDF.ACME_FLOW.
+ */
+export const OTHER_ADDIN_PREFIX = 'XLDUDF.';
+const otherAddIn = (rest: string): string => `${OTHER_ADDIN_PREFIX}${rest.toUpperCase()}`;
+
 /** The formula as the engine reads it: our stored names back to XFMR.NAME, `_xlfn.` dropped. */
 export function toEngineFormula(stored: string): string {
   return outsideQuotes(stored, (code) =>
     code
-      .replace(STORED_CALL, (whole, rest: string) => byStoredName.get(`_XLDUDF_${rest.toUpperCase()}`) ?? unknownOfOurs(rest) ?? whole)
+      .replace(STORED_CALL, (whole, rest: string) => byStoredName.get(`_XLDUDF_${rest.toUpperCase()}`) ?? unknownOfOurs(rest) ?? otherAddIn(rest))
       .replace(FUTURE_PREFIX, '')
       .replace(PLAIN_CALL, (whole, rest: string) => (byFormulaName.has(formulaName(rest.toUpperCase())) ? formulaName(rest.toUpperCase()) : whole)),
   );

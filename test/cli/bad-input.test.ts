@@ -93,28 +93,28 @@ describe('ZIP bombs are refused before they are unpacked', () => {
     const sheet = bigSheet('<row><c><v>1</v></c></row>', 400);
     expect(sheet.declaredSize).toBeGreaterThan(400 * 2 ** 20);
     const r = calc('rows-400MiB', zipOf([...workbookParts(), sheet]), { heapMb: 384 });
-    refused(r, /too large to recalculate here: [\d,]+ rows, [\d,]+ cells and 0 formulas need about .* of memory, more than the \d+ MiB Node\.js may use; .*NODE_OPTIONS=--max-old-space-size/);
+    refused(r, /too large to recalculate here: its worksheets unpack to 400 MiB of XML, which needs about .* of memory, more than the \d+ MiB Node\.js may use; .*NODE_OPTIONS=--max-old-space-size/);
     expect(r.seconds).toBeLessThan(20);
   });
 });
 
 describe('a sheet of a million rows', () => {
-  it('1,000,000 rows with a heap of 1 GiB: refused in seconds, before the sheet is parsed', () => {
-    const bytes = loadColumnWorkbook(1_000_000);
-    const r = calc('million-1GiB', bytes, { heapMb: 1024 });
-    refused(r, /too large to recalculate here: 1,000,000 rows, 1,000,001 cells and 1 formula need about 3\.\d GiB of memory, more than the 1\.0 GiB/);
+  it('1,000,000 rows with a heap of 256 MiB: refused in seconds, before the sheet is parsed', () => {
+    const r = calc('million-256MiB', loadColumnWorkbook(1_000_000), { heapMb: 256 });
+    refused(r, /too large to recalculate here: its worksheets unpack to \d+ MiB of XML, which needs about .* of memory, more than the 2\d\d MiB/);
     expect(r.seconds).toBeLessThan(20);
   });
 
-  it('100,000 rows with the default heap: recalculated, one formula over the whole column', () => {
-    const rows = 100_000;
-    const r = calc('hundred-thousand', loadColumnWorkbook(rows), { json: true });
+  it('1,000,000 rows with the default heap: recalculated, one formula over the whole column', () => {
+    const rows = 1_000_000;
+    const r = calc('million', loadColumnWorkbook(rows), { json: true });
     expect(r.status).toBe(0);
     const [cell] = JSON.parse(r.stdout) as { cell: string; value: number }[];
     let kwh = 0;
     kwh += 1000 + 10_000 * 0.5 ** 2; // row 1
     for (let i = 2; i <= rows; i++) kwh += 1000 + 10_000 * (((i * 37) % 90) / 100 + 0.1) ** 2;
-    expect(cell!.value).toBeCloseTo(kwh / 1000, 6); // energy lost, Σ (P0 + Pk·x²)·1 h
+    expect(cell!.value).toBeCloseTo(kwh / 1000, 4); // energy lost, Σ (P0 + Pk·x²)·1 h
+    console.log(`1,000,000 rows: ${r.seconds.toFixed(1)} s`);
   });
 });
 
@@ -136,7 +136,7 @@ describe('formulas that have no value', () => {
     await wb.xlsx.readFile(r.out);
     expect(wb.getWorksheet('Loop')!.getCell('D1').result).toEqual({ error: '#VALUE!' }); // a file has no #CYCLE!
     const plain = fluxbookWith({}, 'calc', join(root, 'cycle', 'in.xlsx'), '--out', join(root, 'cycle', 'again.xlsx'));
-    expect(plain.stdout).toMatch(/5 formulas recalculated \(3 with XFMR functions\), 4 with an error value \(4 in a circular reference/);
+    expect(plain.stderr).toMatch(/5 formulas recalculated \(3 with XFMR functions\), 4 error values: 4 #CYCLE! \(a circular reference, stored as #VALUE!\); 2 of them from XFMR formulas/);
   });
 
   it('an unknown XFMR name: #NAME? there, the rest of the workbook recalculated, the formula kept as written', async () => {

@@ -35,8 +35,10 @@ import { withinTolerance, type TestItem } from '../../src/core/testReport';
 import { loadLossWorth, noLoadLossWorth, totalOwningCost } from '../../src/core/cost';
 import { doeMinimumEfficiency, meetsEfficiencyRule } from '../../src/core/efficiencyRules';
 import { cyclicMax, hotSpotAfterStep, loadingYear, maxSteadyLoad, overloadTime, profileCheck, steadyHotSpot, thermalModel } from '../../src/core/thermal';
-import { loadWorkbook, recalculate, type FormulaResult } from '../../src/engine/xlsx';
+import { calculateWorkbook, type FormulaResult } from '../../src/engine/xlsx';
 import { xfmr } from '../support/cells';
+
+const recalculated = async (bytes: Buffer): Promise<FormulaResult[]> => (await calculateWorkbook(bytes)).results;
 import { fluxbook } from './run';
 
 let dir: string;
@@ -101,7 +103,7 @@ describe('the Fernhill Works demo', () => {
     expect(summary.files).toEqual([join(dir, FLEET_FILE), join(dir, YEAR_FILE), join(dir, BIDS_FILE)]);
     expect(summary.errors).toBe(0);
     for (const f of summary.files) {
-      const results = recalculate(await loadWorkbook(readFileSync(f)));
+      const results = await recalculated(readFileSync(f));
       expect(results.filter((r) => r.value !== null && typeof r.value === 'object')).toEqual([]);
     }
   });
@@ -121,7 +123,7 @@ describe('the Fernhill Works demo', () => {
   });
 
   it('checks each unit’s test report against its guarantee with one spilling formula per column, as the cores do', async () => {
-    const results = recalculate(await loadWorkbook(readFileSync(summary.files[0]!)));
+    const results = await recalculated(readFileSync(summary.files[0]!));
     const c = FLEET_COLUMNS;
     const spill = (col: string) => {
       const r = results.find((x) => x.cell === `${col}2`)!;
@@ -170,7 +172,7 @@ describe('the Fernhill Works demo', () => {
     for (const h of [0, 1, 4000, HOURS - 1]) expect(profile.getCell(`${p.hotSpot}${h + 2}`).result ?? profile.getCell(`${p.hotSpot}${h + 2}`).value).toBeCloseTo(core.hotSpots[h]!, 10);
     expect(profile.getCell(`${p.hotSpot}${HOURS + 2}`).value).toBeNull();
 
-    const results = recalculate(await loadWorkbook(readFileSync(summary.files[1]!)));
+    const results = await recalculated(readFileSync(summary.files[1]!));
     const at = (cell: string) => results.find((r) => r.sheet === 'Summary' && r.cell === cell)!.value as number;
     const hottest = Math.max(...ambients);
     expect(at(YEAR_CELLS.hottestAmbient)).toBe(hottest);
@@ -182,7 +184,7 @@ describe('the Fernhill Works demo', () => {
     const loads = yearOfLoads();
     const ambients = yearOfAmbients();
     const unit = thermalModel('IEEE', 'ONAN', YEAR_THERMAL_DATA);
-    const results = recalculate(await loadWorkbook(readFileSync(summary.files[1]!)));
+    const results = await recalculated(readFileSync(summary.files[1]!));
     const at = (cell: string) => results.find((r) => r.sheet === 'Summary' && r.cell === cell)!.value;
     const check = profileCheck(unit, loads, ambients, 1, 'normal', 'distribution');
     expect(at(YEAR_CELLS.loadOk)).toBe(check.withinLimits);
@@ -247,7 +249,7 @@ describe('the Fernhill Works demo', () => {
     expect(summary.bids.recommended).toBe('Offer A');
     expect(summary.bids.lowestCompliantToc).toBeCloseTo(best.toc, 8);
 
-    const results = recalculate(await loadWorkbook(readFileSync(summary.files[2]!)));
+    const results = await recalculated(readFileSync(summary.files[2]!));
     const at = (cell: string) => results.find((r) => r.sheet === 'Bids' && r.cell === cell)?.value;
     expect(at(BID_CELLS.aFactor)).toBeCloseTo(a, 12);
     expect(at(BID_CELLS.bFactor)).toBeCloseTo(b, 12);
@@ -327,7 +329,7 @@ describe.runIf(hasSoffice || process.env.CI)('the demo workbooks in LibreOffice'
   }
 
   async function computed(file: string): Promise<FormulaResult[]> {
-    return recalculate(await loadWorkbook(readFileSync(file)));
+    return await recalculated(readFileSync(file));
   }
 
   const colIndex = (letter: string) => letter.charCodeAt(0) - 65;

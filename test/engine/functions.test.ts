@@ -116,9 +116,13 @@ describe('XFMR.EFF evaluated by HyperFormula', () => {
     expectSame(grid(evaluateFormula('=XFMR.EFF(1000, 1400, 10500, 0.5)')), adapterResult('EFF', 1000, 1400, 10500, 0.5));
   });
 
-  it('with a blank required cell or a missing argument: #VALUE! saying so', () => {
+  it('with a blank required cell: #VALUE! naming the argument', () => {
     const expected = [[{ kind: 'VALUE', message: 'argument load: is blank; a value is required' }]];
     expect(grid(evaluateFormula('=XFMR.EFF(1000, 1400, 10500, A1)', [[null]]))).toEqual(expected);
+  });
+
+  it('with too few arguments: one #VALUE! giving the function’s signature', () => {
+    const expected = [[{ kind: 'VALUE', message: 'XFMR.EFF takes 4 to 5 arguments, XFMR.EFF(kva, p0_w, pk_w, load, [pf]); 3 were given' }]];
     expect(grid(evaluateFormula('=XFMR.EFF(1000, 1400, 10500)'))).toEqual(expected);
   });
 
@@ -145,8 +149,13 @@ describe('XFMR.EFF evaluated by HyperFormula', () => {
     expect(grid(evaluateFormula('=XFMR.EFF(1000, 1400, 10500, 1/0)'))[0]![0]).toMatchObject({ kind: 'DIV_BY_ZERO' });
   });
 
-  it('with too many arguments: #N/A', () => {
-    expect(grid(evaluateFormula('=XFMR.EFF(1000, 1400, 10500, 0.5, 1, 1)'))[0]![0]).toMatchObject({ kind: 'NA' });
+  it('with too many arguments: one #VALUE! giving the function’s signature, for a block too', () => {
+    expect(grid(evaluateFormula('=XFMR.EFF(1000, 1400, 10500, 0.5, 1, 1)'))).toEqual([
+      [{ kind: 'VALUE', message: 'XFMR.EFF takes 4 to 5 arguments, XFMR.EFF(kva, p0_w, pk_w, load, [pf]); 6 were given' }],
+    ]);
+    expect(grid(evaluateFormula('=XFMR.EFFCURVE(1000)'))).toEqual([
+      [{ kind: 'VALUE', message: 'XFMR.EFFCURVE takes 3 to 6 arguments, XFMR.EFFCURVE(kva, p0_w, pk_w, [pf], [points], [max_load]); 1 was given' }],
+    ]);
   });
 
   it('with array arithmetic inside an argument (kW to W)', () => {

@@ -30,10 +30,11 @@ describe('names of our functions in a file', () => {
     expect(toEngineFormula(f)).toBe(f);
   });
 
-  it('leaves names that are not ours as they are', () => {
-    expect(toEngineFormula('_xldudf_OTHER_F(2)')).toBe('_xldudf_OTHER_F(2)');
+  it('gives names that are not ours a form the engine parses and does not know (#NAME? there)', () => {
+    // Another add-in's call reaches the engine as XLDUDF.OTHER_F: #NAME? in that cell, not a parse error.
+    expect(toEngineFormula('_xldudf_OTHER_F(2)')).toBe('XLDUDF.OTHER_F(2)');
     // An XFMR name we do not have reaches the engine as XFMR.NOSUCH, which answers #NAME?.
-    expect(toEngineFormula('_xldudf_XFMR_NOSUCH(1)+_xldudf_OTHER_F(2)')).toBe('XFMR.NOSUCH(1)+_xldudf_OTHER_F(2)');
+    expect(toEngineFormula('_xldudf_XFMR_NOSUCH(1)+_xldudf_OTHER_F(2)')).toBe('XFMR.NOSUCH(1)+XLDUDF.OTHER_F(2)');
     expect(toStoredFormula('XFMR.NOSUCH(1)+MYXFMR.EFF(2)+XFMR.EFFX(3)')).toBe('XFMR.NOSUCH(1)+MYXFMR.EFF(2)+XFMR.EFFX(3)');
     expect(callsOurFunctions('XFMR.NOSUCH(1)')).toBe(false);
     expect(callsOurFunctions('1+_xldudf_XFMR_EFF(1,2,3,4)')).toBe(true);

@@ -26,7 +26,8 @@ export const str = (ref: string, v: string): string => `<c r="${ref}" t="inlineS
 export const fml = (ref: string, f: string, attrs = ''): string => `<c r="${ref}"><f${attrs}>${esc(f)}</f></c>`;
 export const row = (r: number, ...cells: string[]): string => `<row r="${r}">${cells.join('')}</row>`;
 
-export async function handMadeXlsx(sheets: readonly HandSheet[]): Promise<Buffer> {
+/** `definedNames`: a `<definedNames>` element for the workbook part, if any. */
+export async function handMadeXlsx(sheets: readonly HandSheet[], definedNames = ''): Promise<Buffer> {
   const zip = new JSZip();
   zip.file(
     '[Content_Types].xml',
@@ -49,7 +50,7 @@ ${sheets.map((_, i) => `<Override PartName="/xl/worksheets/sheet${i + 1}.xml" Co
     'xl/workbook.xml',
     `<?xml version="1.0" encoding="UTF-8" standalone="yes"?>
 <workbook xmlns="${MAIN}" xmlns:r="${REL}">
-<sheets>${sheets.map((s, i) => `<sheet name="${esc(s.name)}" sheetId="${i + 1}" r:id="rId${i + 1}"/>`).join('')}</sheets>
+<sheets>${sheets.map((s, i) => `<sheet name="${esc(s.name)}" sheetId="${i + 1}" r:id="rId${i + 1}"/>`).join('')}</sheets>${definedNames}
 </workbook>`,
   );
   zip.file(
@@ -75,4 +76,11 @@ export async function partText(bytes: Buffer, path: string): Promise<string> {
   const part = zip.file(path);
   if (!part) throw new Error(`no part ${path}`);
   return part.async('string');
+}
+
+/** The package with one part's text replaced (to change a value as a user would). */
+export async function replacePart(bytes: Buffer, path: string, text: string): Promise<Buffer> {
+  const zip = await JSZip.loadAsync(bytes);
+  zip.file(path, text);
+  return zip.generateAsync({ type: 'nodebuffer', compression: 'DEFLATE' });
 }

@@ -1,0 +1,407 @@
+/**
+ * Writes the recalculated package. Every part is copied as it was stored (its compressed bytes
+ * unchanged) except:
+ *  - a worksheet whose formula cells got new values: only those `<c>` elements, and the cells of
+ *    spilled results, are replaced; every other byte of the part is kept;
+ *  - for the first spill in a workbook that has no dynamic-array metadata yet: xl/metadata.xml is
+ *    added, with its content type ([Content_Types].xml) and its workbook relationship;
+ *  - with `values`, xl/calcChain.xml (the order Excel computes formulas in) is left out, with its
+ *    content type and relationship, since no formula is left.
+ *
+ * Cells (ECMA-376 Part 1 §18.3.1.4 `c`): a number result has no `t`; text is `t="str"` (a formula
+ * string, so the shared-string table stays as it is), or an inline string with `values`; TRUE and
+ * FALSE are `t="b"`; errors `t="e"`. A spilled result is an array formula over its range
+ * (`<f t="array" ref="…">`) whose anchor carries `cm`, the index of the cell-metadata block that
+ * marks a dynamic array ([MS-XLSX] 2.6.x: metadataType XLDAPR, futureMetadata with
+ * `xda:dynamicArrayProperties fDynamic="1"`), and every other cell of the range its value.
+ */
+import { a1, MAIN_NS, SHEET_METADATA_REL, SHEET_METADATA_TYPE, type FormulaCell, type PackageRead, type SheetRead } from './read';
+import type { CellResult, JsonValue } from './xlsx';
+import { writeZip, type OutEntry, type ZipReader } from './zip';
+
+// The error codes a file can hold (ECMA-376 Part 1 §18.18.80 ST_CellError? values of `t="e"`);
+// HyperFormula's own (#CYCLE!, #ERROR!, #LIC!, #SPILL!) are stored as #VALUE!, and --json gives the real one.
+const FILE_ERRORS = new Set(['#NULL!', '#DIV/0!', '#VALUE!', '#REF!', '#NAME?', '#NUM!', '#N/A']);
+
+const esc = (s: string): string => s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;');
+const escAttr = (s: string): string => esc(s).replace(/"/g, '&quot;');
+
+/** Text that XML 1.0 cannot hold (control characters) written as Excel escapes them: _x0001_. */
+const xmlText = (s: string): string => esc(s.replace(/_(x[0-9A-Fa-f]{4}_)/g, '_x005F_$1').replace(/[\u0000-\u0008\u000B\u000C\u000E-\u001F]/g, (c) => `_x${c.charCodeAt(0).toString(16).padStart(4, '0').toUpperCase()}_`));
+
+function numberText(n: number): string {
+  if (Object.is(n, -0)) return '0';
+  return String(n);
+}
+
+/** The type and content of a cell holding `v`. */
+function valueParts(v: JsonValue, p: string, asValue: boolean): { t?: string; inner: string } {
+  if (v === null) return { inner: '' };
+  if (typeof v === 'number') return { inner: `<${p}v>${numberText(v)}</${p}v>` };
+  if (typeof v === 'boolean') return { t: 'b', inner: `<${p}v>${v ? 1 : 0}</${p}v>` };
+  if (typeof v === 'string') {
+    if (asValue) return { t: 'inlineStr', inner: `<${p}is><${p}t xml:space="preserve">${xmlText(v)}</${p}t></${p}is>` };
+    return { t: 'str', inner: `<${p}v>${xmlText(v)}</${p}v>` };
+  }
+  return { t: 'e', inner: `<${p}v>${FILE_ERRORS.has(v.error) ? v.error : '#VALUE!'}</${p}v>` };
+}
+
+const ATTR = /([^\s=/<>]+)\s*=\s*(?:"([^"]*)"|'([^']*)')/g;
+
+/** The attributes of a start tag, in order, values as written (still escaped). */
+function attributes(tag: string): [string, string][] {
+  const out: [string, string][] = [];
+  const body = tag.replace(/^<[^\s/>]+/, '');
+  for (const m of body.matchAll(ATTR)) out.push([m[1]!, m[2] ?? m[3] ?? '']);
+  return out;
+}
+
+/** A start tag with some attributes set (a value) or removed (null); new ones after the others. */
+function withAttributes(name: string, old: [string, string][], set: Record<string, string | null>): string {
+  const done = new Set<string>();
+  const parts: string[] = [];
+  for (const [k, v] of old) {
+    if (k in set) {
+      done.add(k);
+      if (set[k] !== null) parts.push(`${k}="${set[k]}"`);
+    } else parts.push(`${k}="${v}"`);
+  }
+  for (const [k, v] of Object.entries(set)) if (!done.has(k) && v !== null) parts.push(`${k}="${v}"`);
+  return `<${name}${parts.length ? ' ' : ''}${parts.join(' ')}`;
+}
+
+const prefixOf = (tag: string): string => {
+  const m = /^<([^\s/>:]+:)?/.exec(tag);
+  return m?.[1] ?? '';
+};
+
+interface Edit {
+  readonly at: number;
+  readonly end: number;
+  readonly text: string;
+  readonly seq: number;
+}
+
+/** Cells by row and column, found in the sheet's index of `<c>` elements. */
+class CellIndex {
+  private byRow?: Map<number, [number, number]>;
+  constructor(private readonly sheet: SheetRead) {}
+
+  private rows(): Map<number, [number, number]> {
+    if (!this.byRow) {
+      this.byRow = new Map();
+      const [r] = this.sheet.cells.cols;
+      for (let i = 0; i < this.sheet.cells.length; i++) {
+        const e = this.byRow.get(r![i]!);
+        if (e) e[1] = i;
+        else this.byRow.set(r![i]!, [i, i]);
+      }
+    }
+    return this.byRow;
+  }
+
+  /** The index of the cell, or undefined. */
+  find(row: number, col: number): number | undefined {
+    const span = this.rows().get(row);
+    if (!span) return undefined;
+    const cols = this.sheet.cells.cols[1]!;
+    for (let i = span[0]; i <= span[1]; i++) if (cols[i] === col) return i;
+    return undefined;
+  }
+
+  /** Where a new cell of `row` at `col` goes: before the first cell to its right, or at the row's end. */
+  insertAt(row: number, col: number): number | undefined {
+    const span = this.rows().get(row);
+    const [, cols, starts] = this.sheet.cells.cols;
+    if (span) for (let i = span[0]; i <= span[1]; i++) if (cols![i]! > col) return starts![i]!;
+    const tag = this.rowTag(row);
+    if (tag === undefined) return undefined;
+    const closeStart = this.sheet.rowTags.cols[3]![tag]!;
+    return closeStart < 0 ? undefined : closeStart;
+  }
+
+  /** The index of the `<row>` element of that number. */
+  rowTag(row: number): number | undefined {
+    const nums = this.sheet.rowTags.cols[0]!;
+    let lo = 0;
+    let hi = this.sheet.rowTags.length - 1;
+    while (lo <= hi) {
+      const mid = (lo + hi) >> 1;
+      if (nums[mid] === row) return mid;
+      if (nums[mid]! < row) lo = mid + 1;
+      else hi = mid - 1;
+    }
+    return undefined;
+  }
+
+  /** Where a new `<row>` of that number goes: before the first row below it, or at the end of sheetData. */
+  newRowAt(row: number): number {
+    const [nums, starts] = this.sheet.rowTags.cols;
+    for (let i = 0; i < this.sheet.rowTags.length; i++) if (nums![i]! > row) return starts![i]!;
+    return this.sheet.sheetData.closeStart;
+  }
+}
+
+interface SheetPlan {
+  /** The new XML of formula cells, by position. */
+  readonly formulaEdits: Edit[];
+  /** The new XML of other cells (spilled values, cleared old results), by row and column. */
+  readonly cells: Map<number, Map<number, string>>;
+}
+
+function planSheet(
+  sheet: SheetRead,
+  cells: CellResult[],
+  options: { values: boolean; cm: number | undefined },
+): SheetPlan {
+  const text = sheet.text;
+  const p = sheet.sheetData.start >= 0 ? prefixOf(text.slice(sheet.sheetData.start, sheet.sheetData.start + 40)) : '';
+  const formulaEdits: Edit[] = [];
+  const other = new Map<number, Map<number, string>>();
+  const index = new CellIndex(sheet);
+  const setCell = (row: number, col: number, xml: string) => {
+    let m = other.get(row);
+    if (!m) other.set(row, (m = new Map()));
+    m.set(col, xml);
+  };
+  /** The start tag of an existing cell, for its style. */
+  const oldTag = (row: number, col: number): string | undefined => {
+    const i = index.find(row, col);
+    if (i === undefined) return undefined;
+    const start = sheet.cells.cols[2]![i]!;
+    return text.slice(start, text.indexOf('>', start) + 1);
+  };
+  const valueCell = (row: number, col: number, v: JsonValue): string => {
+    const old = oldTag(row, col);
+    const keep = old ? attributes(old).filter(([k]) => k === 's') : [];
+    const { t, inner } = valueParts(v, p, options.values);
+    const start = withAttributes(`${p}c`, [['r', a1(row, col)], ...keep], { t: t ?? null });
+    return inner === '' ? `${start}/>` : `${start}>${inner}</${p}c>`;
+  };
+
+  // Old array results first: a new result may cover part of another formula's old range.
+  for (const { cell: f } of cells) {
+    if (!f.oldRange) continue;
+    for (let r = f.oldRange.top; r <= f.oldRange.bottom; r++) {
+      for (let c = f.oldRange.left; c <= f.oldRange.right; c++) {
+        if ((r !== f.row || c !== f.col) && index.find(r, c) !== undefined) setCell(r, c, valueCell(r, c, null));
+      }
+    }
+  }
+  for (const res of cells) {
+    const f = res.cell;
+    const old = text.slice(f.start, f.end);
+    const tagEnd = old.indexOf('>') + 1;
+    const oldStart = old.slice(0, tagEnd);
+    const cp = old.charCodeAt(1) === 99 && (old.charCodeAt(2) === 32 || old.charCodeAt(2) === 62) ? '' : prefixOf(old); // "<c " or "<c>"
+    const spill = res.spill && f.kind !== 'shared' ? res.spill : undefined;
+    const rows = spill?.length ?? 1;
+    const cols = spill?.[0]?.length ?? 1;
+    let value = res.value;
+    if (value === null) value = 0; // a formula that reads a blank shows 0, as in Excel
+    const { t, inner } = valueParts(value, cp, options.values);
+    const set: Record<string, string | null> = { t: t ?? null };
+    let formula = '';
+    let plainTag = !/\st\s*=|\scm\s*=/.test(oldStart); // no type or metadata to change: the start tag stays
+    if (options.values) {
+      set.cm = null;
+    } else {
+      const fOld = text.slice(f.fStart, f.fEnd);
+      const stored = f.written;
+      if (!spill && f.kind !== 'array' && (f.template.stored === (f.template.source ?? f.stored) || fOld.endsWith('/>'))) {
+        formula = fOld;
+      } else {
+        const fTag = fOld.slice(0, fOld.indexOf('>') + 1);
+        const fAttrs = attributes(fTag);
+        if (spill) {
+          const ref = `${a1(f.row, f.col)}:${a1(f.row + rows - 1, f.col + cols - 1)}`;
+          formula = `${withAttributes(`${cp}f`, fAttrs, { t: 'array', ref })}>${esc(stored)}</${cp}f>`;
+          if (options.cm !== undefined) {
+            set.cm = String(options.cm);
+            plainTag = false;
+          }
+        } else if (f.kind === 'array') {
+          formula = `${withAttributes(`${cp}f`, fAttrs, { ref: a1(f.row, f.col) })}>${esc(stored)}</${cp}f>`;
+        } else {
+          formula = `${withAttributes(`${cp}f`, fAttrs, {})}>${esc(stored)}</${cp}f>`;
+        }
+      }
+    }
+    let start: string;
+    if (plainTag && !options.values) start = t === undefined ? oldStart.slice(0, -1) : `${oldStart.slice(0, -1)} t="${t}"`;
+    else start = withAttributes(`${cp}c`, attributes(oldStart), set);
+    const cellXml = `${start}>${formula}${inner}</${cp}c>`;
+    if (cellXml !== old) formulaEdits.push({ at: f.start, end: f.end, text: cellXml, seq: 0 });
+    if (spill) {
+      for (let i = 0; i < rows; i++) {
+        for (let j = 0; j < cols; j++) if (i > 0 || j > 0) setCell(f.row + i, f.col + j, valueCell(f.row + i, f.col + j, spill[i]![j]!));
+      }
+    }
+  }
+  return { formulaEdits, cells: other };
+}
+
+/** The sheet's text with the plan applied, as pieces in order; undefined when nothing changes. */
+function applyPlan(sheet: SheetRead, plan: SheetPlan): string[] | undefined {
+  const text = sheet.text;
+  const edits: Edit[] = [...plan.formulaEdits];
+  const index = new CellIndex(sheet);
+  const p = sheet.sheetData.start >= 0 ? prefixOf(text.slice(sheet.sheetData.start, sheet.sheetData.start + 40)) : '';
+  const newRows: [number, string][] = [];
+  let seq = 1;
+  const formulaStarts = new Set(plan.formulaEdits.map((e) => e.at));
+  for (const row of [...plan.cells.keys()].sort((a, b) => a - b)) {
+    const cells = [...plan.cells.get(row)!.entries()].sort((a, b) => a[0] - b[0]);
+    const tag = index.rowTag(row);
+    if (tag === undefined) {
+      newRows.push([row, `<${p}row r="${row}">${cells.map(([, x]) => x).join('')}</${p}row>`]);
+      continue;
+    }
+    const selfClosing = sheet.rowTags.cols[3]![tag]! < 0;
+    if (selfClosing) {
+      const start = sheet.rowTags.cols[1]![tag]!;
+      const end = sheet.rowTags.cols[4]![tag]!;
+      const open = text.slice(start, end).replace(/\s*\/>$/, '>');
+      edits.push({ at: start, end, text: `${open}${cells.map(([, x]) => x).join('')}</${p}row>`, seq: seq++ });
+      continue;
+    }
+    for (const [col, xml] of cells) {
+      const i = index.find(row, col);
+      if (i !== undefined) {
+        const start = sheet.cells.cols[2]![i]!;
+        const end = sheet.cells.cols[3]![i]!;
+        if (text.slice(start, end) !== xml && !formulaStarts.has(start)) edits.push({ at: start, end, text: xml, seq: seq++ });
+      } else {
+        const at = index.insertAt(row, col)!;
+        edits.push({ at, end: at, text: xml, seq: seq++ });
+      }
+    }
+  }
+  for (const [row, xml] of newRows) {
+    if (sheet.sheetData.empty) continue;
+    const at = index.newRowAt(row);
+    edits.push({ at, end: at, text: xml, seq: seq++ });
+  }
+  if (sheet.sheetData.empty && newRows.length > 0) {
+    const sd = sheet.sheetData;
+    const open = text.slice(sd.start, sd.end).replace(/\s*\/>$/, '>');
+    edits.push({ at: sd.start, end: sd.end, text: `${open}${newRows.map(([, x]) => x).join('')}</${p}sheetData>`, seq: seq++ });
+  }
+  // At one position, insertions go before the element that starts there (which may be replaced).
+  if (edits.length === 0) return undefined;
+  edits.sort((a, b) => a.at - b.at || Number(a.end > a.at) - Number(b.end > b.at) || a.seq - b.seq);
+  const out: string[] = [];
+  let pos = 0;
+  for (const e of edits) {
+    if (e.at < pos) continue; // inside an element already replaced
+    out.push(text.slice(pos, e.at), e.text);
+    pos = e.end;
+  }
+  out.push(text.slice(pos));
+  return out;
+}
+
+/** Removes the cell formulas of a sheet's non-formula text in values mode: nothing else to do. */
+const METADATA_XML = `<?xml version="1.0" encoding="UTF-8" standalone="yes"?>
+<metadata xmlns="${MAIN_NS}" xmlns:xda="http://schemas.microsoft.com/office/spreadsheetml/2017/dynamicarray"><metadataTypes count="1"><metadataType name="XLDAPR" minSupportedVersion="120000" copy="1" pasteAll="1" pasteValues="1" merge="1" splitFirst="1" rowColShift="1" clearFormats="1" clearComments="1" assign="1" coerce="1" cellMeta="1"/></metadataTypes><futureMetadata name="XLDAPR" count="1"><bk><extLst><ext uri="{bdbb8cdc-fa1e-496e-a857-3c3f30c029c3}"><xda:dynamicArrayProperties fDynamic="1" fCollapsed="0"/></ext></extLst></bk></futureMetadata><cellMetadata count="1"><bk><rc t="1" v="0"/></bk></cellMetadata></metadata>`;
+
+function freeName(taken: Set<string>, base: string, ext: string): string {
+  if (!taken.has(`${base}${ext}`)) return `${base}${ext}`;
+  for (let i = 1; ; i++) if (!taken.has(`${base}${i}${ext}`)) return `${base}${i}${ext}`;
+}
+
+function freeRelId(rels: string): string {
+  const used = new Set([...rels.matchAll(/Id\s*=\s*["']([^"']+)["']/g)].map((m) => m[1]));
+  for (let i = 1; ; i++) if (!used.has(`rId${i}`)) return `rId${i}`;
+}
+
+/** Drops the Override of a part from [Content_Types].xml and its Relationship from a .rels text. */
+const withoutOverride = (types: string, part: string): string => types.replace(new RegExp(`<Override[^>]*PartName="/${part.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}"[^>]*/>`, 'g'), '');
+const withoutRelTo = (rels: string, type: RegExp): string => rels.replace(/<Relationship\b[^>]*\/>/g, (r) => (type.test(r) ? '' : r));
+
+export interface Patched {
+  readonly bytes: Buffer;
+  readonly changedParts: string[];
+}
+
+export async function patchPackage(
+  zip: ZipReader,
+  read: PackageRead,
+  cells: CellResult[],
+  options: { values: boolean; onProgress: (done: number, total: number) => void },
+): Promise<Patched> {
+  options.onProgress(0, 1);
+  const bySheet = new Map<number, CellResult[]>();
+  for (const c of cells) {
+    const list = bySheet.get(c.cell.sheet);
+    if (list) list.push(c);
+    else bySheet.set(c.cell.sheet, [c]);
+  }
+  const needsMetadata = !options.values && cells.some((c) => c.spill && c.cell.kind !== 'shared');
+  const taken = new Set(read.entries.map((e) => e.name));
+  let cm = read.dynamicArrayCm;
+  const added: OutEntry[] = [];
+  const replaced = new Map<string, Uint8Array | string[]>();
+  const dropped = new Set<string>();
+  const changedParts: string[] = [];
+
+  if (needsMetadata && cm === undefined && read.metadataPath === undefined) {
+    // A metadata part of our own, related from the workbook and typed in [Content_Types].xml.
+    const folder = read.workbookPath.slice(0, read.workbookPath.lastIndexOf('/') + 1);
+    const path = freeName(taken, `${folder}metadata`, '.xml');
+    const rels = read.texts.get(read.workbookRelsPath) ?? `<?xml version="1.0" encoding="UTF-8" standalone="yes"?>\n<Relationships xmlns="http://schemas.openxmlformats.org/package/2006/relationships"></Relationships>`;
+    const rel = `<Relationship Id="${freeRelId(rels)}" Type="${SHEET_METADATA_REL}" Target="${path.slice(folder.length)}"/>`;
+    const types = read.texts.get('[Content_Types].xml') ?? '';
+    replaced.set(read.workbookRelsPath, Buffer.from(rels.replace(/<\/(\w+:)?Relationships>\s*$/, (end) => `${rel}${end}`), 'utf8'));
+    replaced.set('[Content_Types].xml', Buffer.from(types.replace(/<\/(\w+:)?Types>\s*$/, (end) => `<Override PartName="/${path}" ContentType="${SHEET_METADATA_TYPE}"/>${end}`), 'utf8'));
+    added.push({ name: path, content: Buffer.from(METADATA_XML, 'utf8') });
+    cm = 1;
+  }
+  if (options.values) {
+    const chain = read.entries.find((e) => /(^|\/)calcChain\.xml$/i.test(e.name));
+    if (chain) {
+      dropped.add(chain.name);
+      const types = read.texts.get('[Content_Types].xml');
+      if (types !== undefined) replaced.set('[Content_Types].xml', Buffer.from(withoutOverride(types, chain.name), 'utf8'));
+      const rels = read.texts.get(read.workbookRelsPath);
+      if (rels !== undefined) replaced.set(read.workbookRelsPath, Buffer.from(withoutRelTo(rels, /\/calcChain"/), 'utf8'));
+    }
+  }
+
+  const total = Math.max(1, read.sheets.length);
+  let done = 0;
+  for (const [i, sheet] of read.sheets.entries()) {
+    const list = bySheet.get(i);
+    if (list && list.length > 0) {
+      const plan = planSheet(sheet, list, { values: options.values, cm });
+      if (plan.formulaEdits.length > 0 || plan.cells.size > 0) {
+        const pieces = applyPlan(sheet, plan);
+        if (pieces) replaced.set(sheet.path, pieces);
+      }
+    }
+    options.onProgress(++done * 0.5, total);
+    await new Promise((r) => setImmediate(r));
+  }
+
+  const out: OutEntry[] = [];
+  for (const e of read.entries) {
+    if (dropped.has(e.name)) {
+      changedParts.push(e.name);
+      continue;
+    }
+    const content = replaced.get(e.name);
+    if (content) {
+      out.push(Array.isArray(content) ? { name: e.name, pieces: content } : { name: e.name, content });
+      changedParts.push(e.name);
+    } else out.push({ name: e.name, copy: e, raw: await zip.raw(e) });
+  }
+  for (const a of added) {
+    out.push(a);
+    changedParts.push(a.name);
+  }
+  const bytes = await writeZip(out);
+  options.onProgress(total, total);
+  return { bytes, changedParts };
+}
+
+export type { FormulaCell };
