@@ -1,10 +1,12 @@
 /**
  * The workload both aging benchmarks measure (npm run bench's aging rows and bench:thermal): one
  * unit-year of 8,760 hourly loads and ambients, a fleet of 1,000 units with their own rated rises,
- * and the bare loop of the transcendental calls a step makes (two logs and three exps for IEEE
- * ONAN), the floor any implementation of these formulas pays.
+ * and the bare loop of the transcendental calls a step makes — for IEEE ONAN two logs and four
+ * exps for the temperatures (the step's top-oil time constant included) and one exp at each node
+ * of the aging quadrature (15 for an hourly step) — the floor any implementation of this
+ * integration pays.
  */
-import { agingRateSum, hotSpotSeriesInto, IEEE_ROWS, type ThermalCharacteristics } from '../src/core/thermal';
+import { agingNodes, hotSpotSeriesInto, IEEE_ROWS, runProfile, type ThermalCharacteristics } from '../src/core/thermal';
 
 export const STEPS = 8760;
 export const UNITS = 1000;
@@ -20,10 +22,9 @@ export const fleet: readonly ThermalCharacteristics[] = Array.from({ length: UNI
   hotSpotGradient: 20 + (u % 7),
 }));
 
-/** Hot-spot series and aging sum of one unit-year. */
+/** Hot-spot and aging of one unit-year, the aging integrated along each step (F_EQA's path). */
 export function unitYear(m: ThermalCharacteristics): number {
-  hotSpotSeriesInto(m, loads, ambients, 1, out);
-  return agingRateSum(out, 'upgraded');
+  return runProfile(m, loads, ambients, 1, { paper: 'upgraded' }).agingHours;
 }
 
 /** The hot-spot series alone, its last value. */
@@ -31,12 +32,16 @@ export function hotSpotYear(m: ThermalCharacteristics): number {
   return hotSpotSeriesInto(m, loads, ambients, 1, out)[STEPS - 1]!;
 }
 
-/** The calls the kernel and aging sum make per step, with nothing else: two Math.log, three Math.exp. */
+const NODES = agingNodes(60, 4).t.length;
+
+/** The calls the kernel and the aging quadrature make per step, with nothing else. */
 export function bareLoop(): number {
   let s = 0;
   for (let i = 0; i < STEPS; i++) {
     const k2 = loads[i]! * loads[i]!;
-    s += Math.exp(0.8 * Math.log((1 + 5 * k2) / 6)) + Math.exp(0.8 * Math.log(k2)) + Math.exp(39.16 - 15000 / (ambients[i]! + 353));
+    const a = ambients[i]!;
+    s += Math.exp(0.8 * Math.log((1 + 5 * k2) / 6)) + Math.exp(0.8 * Math.log(k2)) + Math.exp(-60 / (150 + a)) + Math.exp(-a / 100);
+    for (let j = 0; j < NODES; j++) s += Math.exp(39.16 - 15000 / (a + 353 + j));
   }
   return s;
 }

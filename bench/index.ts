@@ -9,6 +9,7 @@ import { adapterOverhead } from './adapter';
 import { agingBenchmark } from './aging';
 import { bundleSize } from './bundle';
 import { calcBenchmark } from './calc';
+import { cyclicBenchmark } from './cyclic';
 import { fleetBenchmark } from './fleet';
 import { printTable } from './harness';
 
@@ -19,8 +20,9 @@ async function main(): Promise<void> {
   const fleet = fleetBenchmark();
   const adapter = await adapterOverhead();
   const aging = await agingBenchmark();
+  const cyclic = await cyclicBenchmark();
   const calc = await calcBenchmark();
-  const rows = [...calc, ...fleet.rows, ...adapter, ...aging, bundleSize()];
+  const rows = [...calc, ...fleet.rows, ...adapter, ...aging, ...cyclic, bundleSize()];
   console.log('');
   printTable(rows);
   const missed = rows.filter((r) => !r.met);

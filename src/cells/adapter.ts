@@ -216,6 +216,23 @@ function coerceSeries(arg: ArgDecl, raw: unknown, isError: IsError): Float64Arra
   return out;
 }
 
+/**
+ * A block of the shape an argument's range reader takes: read whole, once a call. A host error
+ * value inside it is the whole result; the reader's refusal names the argument.
+ */
+function coerceRange(arg: ArgDecl, m: unknown[][], isError: IsError): ArgValue {
+  for (const row of m) for (const v of row) if (isError(v)) throw new WholeResultFault(hostError(v));
+  try {
+    return arg.range!.read(m);
+  } catch (error) {
+    if (error instanceof InputError) throw new WholeResultFault({ kind: 'refused', message: error.message });
+    throw error;
+  }
+}
+
+/** True when an argument reads this matrix whole: it has a range reader of exactly this shape. */
+const readWhole = (arg: ArgDecl, m: unknown[][]): boolean => arg.range !== undefined && m.length === arg.range.rows && m[0]!.length === arg.range.cols;
+
 // ---------------------------------------------------------------------------------------------
 // Step 3: evaluate — compute's refusals and results as cells
 // ---------------------------------------------------------------------------------------------
@@ -294,6 +311,10 @@ function prepare({ decls, readers, isError }: Adapted, raw: unknown[]): Prepared
       continue;
     }
     const m = asMatrix(d.name, raw[k]);
+    if (readWhole(d, m)) {
+      buf[k] = coerceRange(d, m, isError);
+      continue;
+    }
     shape.include(d.name, m);
     const r = m.length;
     const c = m[0]!.length;
@@ -351,6 +372,10 @@ function runBlock({ decls, readers, makeError, isError }: Adapted, compute: Bloc
       return;
     }
     const m = asMatrix(d.name, raw[k]);
+    if (readWhole(d, m)) {
+      values[k] = coerceRange(d, m, isError);
+      return;
+    }
     if (m.length !== 1 || m[0]!.length !== 1) {
       throw new WholeResultFault(refused(d.name, `is ${m.length}×${m[0]!.length} cells; this function takes a single value here`));
     }

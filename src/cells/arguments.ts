@@ -4,12 +4,18 @@
  * example takes `withSample(arg, value)`; anything else different is a different argument and
  * gets its own name.
  */
+import type { ConductorMaterial, LossStandard } from '../core/losses';
 import type { Cooling, Paper, ThermalMethod } from '../core/thermal';
 import { type Arg, type ArgValue, choice, num, series } from './declaration';
 
 /** The same argument with another sample value for a function's worked example. */
 export function withSample<V extends ArgValue>(arg: Arg<V>, sample: Arg<V>['sample']): Arg<V> {
   return { ...arg, sample };
+}
+
+/** A choice that may be left blank without a default: compute then receives undefined. */
+export function blankable<T extends string>(arg: Arg<T>): Arg<T | undefined> {
+  return { ...arg, optional: true };
 }
 
 // Nameplate and test report.
@@ -32,7 +38,7 @@ export const ambient = num('ambient_c', 'Â°C', 'Ambient temperature, -60 to 60 Â
 // Thermal model.
 export const cooling = choice(
   'cooling',
-  'Cooling mode: "ONAN", "ONAF", "OFAF" (or "OF"), "ODAF" (or "OD"); sets the exponents, time constants and rated rises.',
+  'Cooling mode: "ONAN", "ONAF", "OFAF" (or "OF"), "ODAF" (or "OD"); sets the exponents, time constants and rated rises. The loading functions also take the block XFMR.HEATRUN spills here, with the unit\'s own heat-run data.',
   { options: ['ONAN', 'ONAF', 'OF', 'OD'] as const satisfies readonly Cooling[], aliases: { OFAF: 'OF', OFWF: 'OF', ODAF: 'OD', ODWF: 'OD' }, default: 'ONAN' },
 );
 export const thermalMethod = choice(
@@ -60,3 +66,14 @@ export const doeLevels = num('levels', 'year', 'DOE levels: 2016 for units made 
   default: 2016,
 });
 export const bil = num('bil_kv', 'kV', 'Basic impulse level of the high-voltage winding; needed for "mvdry" only.', 95, { optional: true });
+
+// Winding conductor and the standard whose temperature constant applies (losses, test reports).
+export const material = choice('material', 'Winding conductor: "Cu" or "Al".', {
+  options: ['Cu', 'Al'] as const satisfies readonly ConductorMaterial[],
+  aliases: { copper: 'Cu', aluminium: 'Al', aluminum: 'Al' },
+  default: 'Cu',
+});
+export const lossStandard = choice('standard', '"IEEE" (copper Tk 234.5) or "IEC" (copper Tk 235); aluminium is 225 in both.', {
+  options: ['IEEE', 'IEC'] as const satisfies readonly LossStandard[],
+  default: 'IEEE',
+});

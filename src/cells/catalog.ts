@@ -9,11 +9,13 @@ import * as current from './functions/current';
 import * as efficiency from './functions/efficiency';
 import * as energy from './functions/energy';
 import * as harmonics from './functions/harmonics';
+import * as loading from './functions/loading';
 import * as losses from './functions/losses';
 import * as ratio from './functions/ratio';
 import * as regulation from './functions/regulation';
 import * as rules from './functions/rules';
 import * as sizing from './functions/sizing';
+import * as testReports from './functions/testReports';
 import * as thermal from './functions/thermal';
 
 // COMPLIES (compliance) stays last: it checks a unit against the rules listed just before it.
@@ -26,9 +28,11 @@ const groups: Record<string, CellFunctionDecl>[] = [
   efficiency,
   energy,
   thermal,
+  loading,
   cost,
   regulation,
   rules,
+  testReports,
   compliance,
 ];
 

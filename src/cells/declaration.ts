@@ -11,8 +11,24 @@ export type Scalar = number | string | boolean;
 
 export type ArgType = 'number' | 'text' | 'boolean';
 
+/** What an argument's range reader makes of a whole range (a labelled block of a unit's data). */
+export interface RangeValue {
+  readonly kind: string;
+}
+
 /** A value compute can receive: what the adapter makes of a cell or a range for one argument. */
-export type ArgValue = number | string | boolean | Float64Array | undefined;
+export type ArgValue = number | string | boolean | Float64Array | RangeValue | undefined;
+
+/**
+ * A block of cells of one fixed shape that a single-value argument also takes whole (see
+ * `orRange`): `read` turns it into the value compute receives, or throws InputError naming the
+ * argument.
+ */
+export interface RangeReader {
+  readonly rows: number;
+  readonly cols: number;
+  readonly read: (cells: readonly (readonly unknown[])[]) => RangeValue;
+}
 
 /** The options of a `choice` argument: the spellings compute receives, and other accepted spellings. */
 export interface Choices {
@@ -36,6 +52,8 @@ export interface ArgDecl {
   readonly sample: Scalar | readonly number[];
   /** A text argument with a fixed set of options, parsed by the adapter (see `choice`). */
   readonly choices?: Choices;
+  /** A single-value argument that also takes a whole range, read by this (see `orRange`). */
+  readonly range?: RangeReader;
 }
 
 /** An argument declaration that also records the type compute receives for it. */
@@ -151,6 +169,20 @@ export function choice<const T extends string>(
     sample: fallback ?? options[0]!,
     choices: { options, aliases },
   };
+}
+
+/**
+ * The same argument, also taking a block of exactly `rows` × `cols` cells, which `read` turns into
+ * one value for every element: a range of that shape is read whole, never broadcast; any other
+ * shape, and a single cell, is read as the argument always reads it. The heat-run block a unit's
+ * thermal data spills, given in place of the cooling name, is read this way.
+ */
+export function orRange<V extends ArgValue, R extends RangeValue>(
+  arg: Arg<V>,
+  shape: { readonly rows: number; readonly cols: number },
+  read: (cells: readonly (readonly unknown[])[]) => R,
+): Arg<V | R> {
+  return { ...arg, range: { rows: shape.rows, cols: shape.cols, read } };
 }
 
 /** A series of numbers taken whole; a blank optional series becomes the one-value series [default]. */

@@ -43,9 +43,23 @@ function presentWorthPerWatt(priceKwh: number, rate: number, years: number, hour
   return ((price * h) / 1000) * presentWorthFactor(rate, years);
 }
 
+/**
+ * The yearly cost of one watt of peak demand: a demand (capacity) charge in money per kW a year,
+ * as utilities evaluating losses add it to the energy term (IEEE C57.120, from memory: the
+ * system-capacity cost beside the energy cost). A watt of no-load loss is always present at the
+ * system peak; a watt of rated load loss is there as (responsibility × peak_load)², where the
+ * responsibility factor is the unit's load at the system peak over its own peak load — squared
+ * because load loss goes with current squared (common practice). An evaluation that states a
+ * responsibility factor for the losses themselves (already squared) is given as its square root.
+ */
+function demandWorthPerWatt(demandCharge: number, rate: number, years: number): number {
+  const d = nonNegative('demand_kw_year', demandCharge);
+  return d === 0 ? 0 : (d / 1000) * presentWorthFactor(rate, years);
+}
+
 /** A: the present worth of one watt of no-load loss (money per W). */
-export function noLoadLossWorth(priceKwh: number, rate: number, years: number, hours: number): number {
-  return presentWorthPerWatt(priceKwh, rate, years, hours);
+export function noLoadLossWorth(priceKwh: number, rate: number, years: number, hours: number, demandCharge = 0): number {
+  return presentWorthPerWatt(priceKwh, rate, years, hours) + demandWorthPerWatt(demandCharge, rate, years);
 }
 
 /** B: the present worth of one watt of rated load loss (money per W) at that loss factor and peak. */
@@ -56,10 +70,15 @@ export function loadLossWorth(
   rate: number,
   years: number,
   hours: number,
+  demandCharge = 0,
+  responsibility = 1,
 ): number {
   const lsf = atMostOne('loss_factor', lossFactor);
   const peak = perUnitLoad('peak_load', peakLoad);
-  return presentWorthPerWatt(priceKwh, rate, years, hours) * lsf * peak * peak;
+  const rf = atMostOne('responsibility', responsibility);
+  const energy = presentWorthPerWatt(priceKwh, rate, years, hours) * lsf;
+  const demand = demandWorthPerWatt(demandCharge, rate, years) * rf * rf;
+  return (energy + demand) * peak * peak;
 }
 
 /** Total owning cost: purchase price plus the capitalised no-load and load losses. */

@@ -58,14 +58,24 @@ export function harmonicLossFactor(orders: Float64Array, currents: Float64Array)
   return s.weighted / s.squares;
 }
 
-/** K = Σ I_h² h², currents in per unit of rated rms current (UL 1561/1562). */
-export function kFactor(orders: Float64Array, currents: Float64Array): number {
+/**
+ * What the currents of a K-factor spectrum are measured against. "rated": per unit of the
+ * transformer's rated current, as the UL definition takes them. "fundamental": per unit (or per
+ * cent) of the fundamental, as harmonic meters report them; such a spectrum says nothing of the
+ * load, so it is scaled to an rms of 1 per unit — the spectrum at rated current, the duty a
+ * K-rated transformer is specified for — and K is then the same number as HLF.
+ */
+export type SpectrumBasis = 'rated' | 'fundamental';
+
+/** K = Σ I_h² h², I_h per unit of rated rms current (UL 1561/1562). */
+export function kFactor(orders: Float64Array, currents: Float64Array, basis: SpectrumBasis = 'rated'): number {
   const s = checkedSpectrum(orders, currents);
+  if (basis === 'fundamental') return s.weighted / s.squares;
   const rms = Math.sqrt(s.squares);
   if (rms > MAX_RMS_PER_UNIT) {
     throw new InputError(
       'currents',
-      `their rms is ${shown(rms)} per unit of rated current; give the currents per unit of the rated current (e.g. 0.2 or 20%), not in A`,
+      `their rms is ${shown(rms)} per unit of rated current; give the currents per unit of the rated current (e.g. 0.2 or 20%), not in A — or, for a spectrum in per cent of the fundamental as meters report it, give basis "fundamental"`,
     );
   }
   return s.weighted;

@@ -2,8 +2,8 @@
  * Standard kVA ratings and the next standard rating for a load. Tables are typed once, with the
  * source of every row; a load beyond the largest rating of a series has no row (#N/A).
  */
-import { NotInTableError, shown } from './errors';
-import { fractionBelowOne, positive } from './guards';
+import { InputError, NoAnswerError, NotInTableError, shown } from './errors';
+import { anyNumber, fractionBelowOne, positive } from './guards';
 
 export type RatingSeriesId = 'US1' | 'US3' | 'IEC';
 
@@ -17,15 +17,17 @@ export interface RatingSeries {
 }
 
 /**
- * IEEE C57.12.00 preferred continuous kVA ratings, single-phase (from memory), as listed by the
- * secondary source electrical-engineering-portal.com/electrical-thumb-rules-you-must-follow-part-5
- * ("Standard Size of Transformer"). That page writes the ratings above 1000 kVA in a shortened
- * form (1.25, 1.66, 3.33, 6.6, 8.3, 16.6, 20.8, 33.33); they are read here as the thirds-of-a-
- * three-phase-bank values 1250, 1667, 3333, 6667, 8333, 16 667, 20 833, 33 333 kVA (from memory).
+ * IEEE C57.12.00 preferred continuous kVA ratings, single-phase (from memory). Each is one third
+ * of a rating of the three-phase series below, rounded to the kVA — a bank of three single-phase
+ * units makes that three-phase rating (common practice) — so 20 000 kVA (a third of 60 000) is a
+ * rating and 20 833 is not. The distribution sizes 10 … 833 kVA, 667 included, are the kVA rows of
+ * the DOE single-phase tables of 10 CFR 431.196. The secondary source of the series
+ * (docs/references.md, Currents) prints the larger ones as 1.25, 1.66, 2.5, 3.33, 5.0, 6.6, 8.3,
+ * 10, 12.5, 16.6, 20.8 (sic), 25, 33.33 thousand kVA, and leaves out 667.
  */
 const US_SINGLE_PHASE: readonly number[] = [
-  5, 10, 15, 25, 37.5, 50, 75, 100, 167, 250, 333, 500, 833, 1250, 1667, 2500, 3333, 5000, 6667, 8333, 10000, 12500,
-  16667, 20833, 25000, 33333,
+  5, 10, 15, 25, 37.5, 50, 75, 100, 167, 250, 333, 500, 667, 833, 1250, 1667, 2500, 3333, 5000, 6667, 8333, 10000,
+  12500, 16667, 20000, 25000, 33333,
 ];
 
 /**
@@ -63,13 +65,13 @@ export const RATING_SERIES: Readonly<Record<RatingSeriesId, RatingSeries>> = {
   US1: {
     id: 'US1',
     title: 'IEEE C57.12.00 single-phase',
-    source: 'IEEE C57.12.00 preferred kVA ratings, single-phase (from memory; secondary source electrical-engineering-portal.com, electrical thumb rules part 5)',
+    source: 'IEEE C57.12.00 preferred kVA ratings, single-phase: thirds of the three-phase series (from memory; secondary source in docs/references.md, Currents)',
     ratingsKva: US_SINGLE_PHASE,
   },
   US3: {
     id: 'US3',
     title: 'IEEE C57.12.00 three-phase',
-    source: 'IEEE C57.12.00 preferred kVA ratings, three-phase (from memory; secondary source electrical-engineering-portal.com, electrical thumb rules part 5)',
+    source: 'IEEE C57.12.00 preferred kVA ratings, three-phase (from memory; secondary source in docs/references.md, Currents)',
     ratingsKva: US_THREE_PHASE,
   },
   IEC: {
@@ -96,4 +98,25 @@ export function nextStandardRating(loadKva: number, margin: number, seriesId: Ra
     );
   }
   return rating;
+}
+
+/**
+ * Years until a peak growing by `growth` a year, compounded, reaches `limitKva`:
+ * n = ln(limit / peak) / ln(1 + growth) — the same n as a spreadsheet's NPER(growth, 0, −peak,
+ * limit). 0 when the peak is already at or above the limit; no answer when the peak never gets
+ * there (growth 0 or negative).
+ */
+export function yearsToLimit(peakKva: number, growth: number, limitKva: number): number {
+  const peak = positive('peak_kva', peakKva);
+  const limit = positive('limit_kva', limitKva);
+  anyNumber('growth', growth);
+  if (growth >= 1) {
+    throw new InputError('growth', `${shown(growth)} is 100 % a year or more; type it as a percentage, e.g. ${shown(growth)}% or ${shown(growth / 100)}`);
+  }
+  if (growth <= -1) throw new InputError('growth', `must be above -100 % a year (got ${shown(growth)})`);
+  if (peak >= limit) return 0;
+  if (growth <= 0) {
+    throw new NoAnswerError(`a peak of ${shown(peak)} kVA ${growth === 0 ? 'that does not grow' : 'that falls'} never reaches ${shown(limit)} kVA`);
+  }
+  return Math.log(limit / peak) / Math.log1p(growth);
 }

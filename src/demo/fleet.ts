@@ -29,7 +29,36 @@ const FLEET_SHEET = [
   ['eff50', 'Efficiency at 50 % load'],
   ['peakLoad', 'Load of peak efficiency (per unit)'],
   ['pei', 'Peak efficiency index'],
+  ['p0Guaranteed', 'Guaranteed no-load loss (W)'],
+  ['pkGuaranteed', 'Guaranteed load loss at 85 °C (W)'],
+  ['zGuaranteed', 'Guaranteed impedance'],
+  ['p0Accepted', 'No-load loss within +15 %'],
+  ['pkAccepted', 'Load loss within +15 %'],
+  ['totalLimit', 'Highest accepted total loss (W)'],
+  ['totalAccepted', 'Total loss within +10 %'],
+  ['zAccepted', 'Impedance within ±10 %'],
+  ['ratioAccepted', 'Ratio within IEC tolerance'],
 ] as const;
+
+/**
+ * The acceptance check of each test report against its guarantee (IEC 60076-1 Table 1): one
+ * formula per column, written in the first unit's row, whose ranges cover the whole fleet so the
+ * result spills down the column. A component loss passes on its own +15 % only with the total
+ * within +10 % as well, which is why the total has a column of its own.
+ */
+function acceptanceFormulas(c: typeof FLEET_COLUMNS, first: number, last: number): Partial<Record<keyof typeof FLEET_COLUMNS, string>> {
+  const col = (k: string) => `${k}${first}:${k}${last}`;
+  const measuredTotal = `${col(c.p0)}+${col(c.pk)}`;
+  const guaranteedTotal = `${col(c.p0Guaranteed)}+${col(c.pkGuaranteed)}`;
+  return {
+    p0Accepted: `XFMR.TESTOK(${col(c.p0)},${col(c.p0Guaranteed)},"no-load loss")`,
+    pkAccepted: `XFMR.TESTOK(${col(c.pk)},${col(c.pkGuaranteed)},"load loss")`,
+    totalLimit: `XFMR.TESTTOL("total loss",${guaranteedTotal})`,
+    totalAccepted: `XFMR.TESTOK(${measuredTotal},${guaranteedTotal},"total loss")`,
+    zAccepted: `XFMR.TESTOK(${col(c.z)},${col(c.zGuaranteed)},"impedance")`,
+    ratioAccepted: `XFMR.TESTOK(${col(c.measured)},${col(c.nameplateRatio)},"ratio","IEC",${col(c.z)})`,
+  };
+}
 
 /** Column letters of the fleet sheet, so formulas and readers agree. */
 export const FLEET_COLUMNS = columnsOf(FLEET_SHEET.map(([key]) => key));
@@ -67,7 +96,14 @@ export function fleetWorkbook(): ExcelJS.Workbook {
     cell(c.eff50).value = { formula: `XFMR.EFF(${at(c.kva)},${at(c.p0)},${at(c.pk)},0.5)` };
     cell(c.peakLoad).value = { formula: `XFMR.EFFMAXLOAD(${at(c.p0)},${at(c.pk)})` };
     cell(c.pei).value = { formula: `XFMR.PEI(${at(c.kva)},${at(c.p0)},${at(c.pk)})` };
+    cell(c.p0Guaranteed).value = u.guaranteed.p0W;
+    cell(c.pkGuaranteed).value = u.guaranteed.pkW;
+    cell(c.zGuaranteed).value = u.guaranteed.z;
   });
+  const first = fleetRow(0);
+  for (const [key, formula] of Object.entries(acceptanceFormulas(c, first, fleetRow(FLEET.length - 1)))) {
+    ws.getCell(`${c[key as keyof typeof c]}${first}`).value = { formula: formula! };
+  }
   const formats: Record<string, string> = {
     [c.z]: '0.00%',
     [c.measured]: '0.000',
@@ -78,6 +114,8 @@ export function fleetWorkbook(): ExcelJS.Workbook {
     [c.eff50]: '0.00%',
     [c.peakLoad]: '0.00',
     [c.pei]: '0.000%',
+    [c.zGuaranteed]: '0.00%',
+    [c.totalLimit]: '#,##0',
   };
   for (const [col, fmt] of Object.entries(formats)) ws.getColumn(col).numFmt = fmt;
   ws.columns.forEach((col) => (col.width = 16));

@@ -128,8 +128,11 @@ function eachSize(plugin: PluginInternals, decl: CellFunctionDecl, ast: Ast, sta
   const s = withArrays(state);
   if (argumentCountError(decl, ast.args.length)) return ArraySize.scalar(); // refused: wrong number of arguments
   for (let k = 0; k < ast.args.length; k++) {
-    if (decl.args[k]!.series) continue;
+    const a = decl.args[k]!;
+    if (a.series) continue;
     const size = plugin.arraySizeForAst(ast.args[k], s);
+    // A block its argument reads whole (orRange) is one value, not a range to broadcast.
+    if (a.range !== undefined && size.height === a.range.rows && size.width === a.range.cols) continue;
     if (size.height !== 1) {
       if (rows !== 1 && size.height !== rows) return ArraySize.scalar();
       rows = size.height;

@@ -1,7 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { adapt, CellError, plainErrors } from '../../src/cells/adapter';
 import { catalog } from '../../src/cells/catalog';
+import { each, num, orRange } from '../../src/cells/declaration';
 import { efficiencyAt } from '../../src/core/efficiency';
+import { InputError } from '../../src/core/errors';
 import { cellFunction } from '../support/cells';
 
 const cell = cellFunction;
@@ -142,5 +144,40 @@ describe('every declaration', () => {
       const firstOptional = d.args.findIndex((a) => a.optional);
       if (firstOptional >= 0) expect(d.args.slice(firstOptional).every((a) => a.optional)).toBe(true);
     }
+  });
+});
+
+describe('an argument that also takes a whole range (orRange)', () => {
+  // A made-up declaration: a scale given as a number, or as a 2×1 block [label, factor] read whole.
+  const scale = orRange(num('scale', 'ratio', 'A factor, or a block holding one.', 2), { rows: 1, cols: 2 }, (cells) => {
+    if (cells.length !== 1 || cells[0]!.length !== 2 || cells[0]![0] !== 'factor' || typeof cells[0]![1] !== 'number') {
+      throw new InputError('scale', 'is not a factor block');
+    }
+    return { kind: 'factor', value: cells[0]![1] as number };
+  });
+  const decl = each({
+    name: 'TIMES',
+    group: 'test',
+    help: 'x times the scale.',
+    source: 'common practice',
+    args: [num('x', 'ratio', 'A value.', 1), scale],
+    result: { type: 'number', unit: 'ratio' },
+    compute: (x, s) => x * (typeof s === 'number' ? s : (s as unknown as { value: number }).value),
+  });
+  const times = adapt(decl, plainErrors);
+
+  it('reads a single cell as the argument always does, a block of its shape whole, once, for every element, and broadcasts other ranges', () => {
+    expect(times(3, 2)).toEqual([[6]]);
+    expect(times(3, [['factor', 5]])).toEqual([[15]]);
+    expect(times([[1], [2]], [['factor', 5]])).toEqual([[5], [10]]);
+    expect(times(3, [[2], [4]])).toEqual([[6], [12]]);
+  });
+
+  it("turns the reader's refusal into a whole-result #VALUE! naming the argument, and passes a host error through", () => {
+    const refused = times(3, [['x', 1]])[0]![0] as CellError;
+    expect(refused.message).toBe('argument scale: is not a factor block');
+    const host = Symbol('#DIV/0!');
+    const withHost = adapt(decl, plainErrors, { isError: (v) => v === host });
+    expect(withHost(3, [['factor', host]])).toEqual([[host]]);
   });
 });

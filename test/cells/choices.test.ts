@@ -5,18 +5,21 @@
  */
 import { describe, expect, it } from 'vitest';
 import { catalog } from '../../src/cells/catalog';
-import { hotSpotSteady, relativeAgingRate } from '../../src/core/thermal';
+import { relativeAgingRate, steadyHotSpot, thermalModel, type Cooling, type ThermalMethod } from '../../src/core/thermal';
 import { loadLossAtTemperature } from '../../src/core/losses';
 import { doeMinimumEfficiency, euMaximumLoss } from '../../src/core/efficiencyRules';
 import { errorOf, xfmr } from '../support/cells';
 
+/** The steady hot-spot of the table row at 30 °C ambient, straight from the core. */
+const hotSpotSteady = (load: number, cooling: Cooling, method: ThermalMethod) => steadyHotSpot(thermalModel(method, cooling), load, 30);
+
 describe('cooling', () => {
   const hotspot = (cooling: unknown) => xfmr('HOTSPOT', 1, 30, cooling, null, null, null, 'IEEE');
   it('reads cooling names case-insensitively, with the IEEE and IEC spellings', () => {
-    expect(hotspot(' onan ')).toBe(hotSpotSteady(1, 30, 'ONAN', undefined, undefined, undefined, 'IEEE'));
-    expect(hotspot('Onaf')).toBe(hotSpotSteady(1, 30, 'ONAF', undefined, undefined, undefined, 'IEEE'));
-    for (const of of ['OFAF', 'of', 'OFWF']) expect(hotspot(of)).toBe(hotSpotSteady(1, 30, 'OF', undefined, undefined, undefined, 'IEEE'));
-    for (const od of ['ODAF', 'od', 'odwf']) expect(hotspot(od)).toBe(hotSpotSteady(1, 30, 'OD', undefined, undefined, undefined, 'IEEE'));
+    expect(hotspot(' onan ')).toBe(hotSpotSteady(1, 'ONAN', 'IEEE'));
+    expect(hotspot('Onaf')).toBe(hotSpotSteady(1, 'ONAF', 'IEEE'));
+    for (const of of ['OFAF', 'of', 'OFWF']) expect(hotspot(of)).toBe(hotSpotSteady(1, 'OF', 'IEEE'));
+    for (const od of ['ODAF', 'od', 'odwf']) expect(hotspot(od)).toBe(hotSpotSteady(1, 'OD', 'IEEE'));
   });
   it('refuses an unknown cooling, naming cooling and listing the options', () => {
     expect(errorOf(hotspot('AN')).message).toBe('argument cooling: "AN" is not one of "ONAN", "ONAF", "OF", "OD" or "OFAF", "OFWF", "ODAF", "ODWF"');
@@ -26,8 +29,8 @@ describe('cooling', () => {
 describe('method and paper', () => {
   it('reads the method with any separator, refusing others by name', () => {
     const m = (method: unknown) => xfmr('HOTSPOT', 1.2, 30, 'ONAN', null, null, null, method);
-    expect(m('ieee')).toBe(hotSpotSteady(1.2, 30, 'ONAN', undefined, undefined, undefined, 'IEEE'));
-    expect(m('iec power')).toBe(hotSpotSteady(1.2, 30, 'ONAN', undefined, undefined, undefined, 'IEC-POWER'));
+    expect(m('ieee')).toBe(hotSpotSteady(1.2, 'ONAN', 'IEEE'));
+    expect(m('iec power')).toBe(hotSpotSteady(1.2, 'ONAN', 'IEC-POWER'));
     expect(m('IEC_POWER')).toBe(m('IEC-POWER'));
     expect(errorOf(m('ANSI')).message).toMatch(/^argument method: "ANSI" is not one of "IEEE", "IEC", "IEC-POWER"$/);
   });

@@ -18,8 +18,16 @@ describe('regulation-rule cells', () => {
   });
   it('COMPLIES returns TRUE/FALSE with kind, phases and levels defaulted', () => {
     const f = cellFunction('COMPLIES');
-    expect(firstCell(f(500, 400, 3600, 'both'))).toBe(true);
-    expect(firstCell(f(500, 520, 3000, 'both', null, null, null, null))).toBe(false);
+    expect(firstCell(f(500, 400, 3600, 'both', null, null, null, null, 400, 3600))).toBe(true);
+    expect(firstCell(f(500, 520, 3000, 'both', null, null, null, null, 520, 3000))).toBe(false);
+    expect(errorOf(f(500, 400, 3600, 'both')).message).toMatch(/argument p0_eu_w: is blank; "both" needs the EU losses/);
     expect(errorOf(f(500, 400, 3600, null)).message).toMatch(/argument rule: is blank/);
+  });
+  it('DOEMIN and EUMAXLOSS: out-of-scope units are #N/A with the argument named', () => {
+    const doe = errorOf(cellFunction('DOEMIN')(1000, 'liquid', 3, null, null, 69000, 480));
+    expect(doe.code).toBe('#N/A');
+    expect(doe.message).toMatch(/argument hv_v: 69000 V is above 34,500 V/);
+    expect(errorOf(cellFunction('EUMAXLOSS')(400, 'pk', 36)).code).toBe('#N/A');
+    expect(errorOf(cellFunction('EUMAXLOSS')(400, 'pk', null, null, true)).message).toMatch(/argument pole_mounted/);
   });
 });

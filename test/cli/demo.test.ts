@@ -20,15 +20,21 @@ import {
   OFFER_COLUMNS,
   OFFER_ROW,
   OFFERS,
+  hottestDay,
   PROFILE_COLUMNS,
+  YEAR_BLOCKS,
   YEAR_CELLS,
+  YEAR_THERMAL_DATA,
+  measuredRatio,
   YEAR_UNIT,
   yearOfAmbients,
   yearOfLoads,
 } from '../../src/demo';
+import { turnsRatio } from '../../src/core/ratio';
+import { withinTolerance, type TestItem } from '../../src/core/testReport';
 import { loadLossWorth, noLoadLossWorth, totalOwningCost } from '../../src/core/cost';
 import { doeMinimumEfficiency, meetsEfficiencyRule } from '../../src/core/efficiencyRules';
-import { equivalentAging, hotSpotProfile, lifeFraction, lifeUsedHours, maxLoadForHotSpot } from '../../src/core/thermal';
+import { cyclicMax, hotSpotAfterStep, loadingYear, maxSteadyLoad, overloadTime, profileCheck, steadyHotSpot, thermalModel } from '../../src/core/thermal';
 import { calculateWorkbook, type FormulaResult } from '../../src/engine/xlsx';
 import { xfmr } from '../support/cells';
 
@@ -116,17 +122,42 @@ describe('the Fernhill Works demo', () => {
     expect(text).toMatch(/verify with a qualified engineer/);
   });
 
+  it('checks each unit’s test report against its guarantee with one spilling formula per column, as the cores do', async () => {
+    const results = await recalculated(readFileSync(summary.files[0]!));
+    const c = FLEET_COLUMNS;
+    const spill = (col: string) => {
+      const r = results.find((x) => x.cell === `${col}2`)!;
+      expect(r.formula).toMatch(/^=?XFMR\.TEST(OK|TOL)\(/);
+      expect(r.spill?.ref).toBe(`${col}2:${col}${FLEET.length + 1}`);
+      return r.spill!.values.map((row) => row[0]);
+    };
+    const ok = (measured: number, guaranteed: number, item: TestItem, z?: number) => withinTolerance(measured, guaranteed, item, 'IEC', z, 'two-winding');
+    expect(spill(c.p0Accepted)).toEqual(FLEET.map((u) => ok(u.p0W, u.guaranteed.p0W, 'no-load loss')));
+    expect(spill(c.pkAccepted)).toEqual(FLEET.map((u) => ok(u.pkW, u.guaranteed.pkW, 'load loss')));
+    expect(spill(c.totalAccepted)).toEqual(FLEET.map((u) => ok(u.p0W + u.pkW, u.guaranteed.p0W + u.guaranteed.pkW, 'total loss')));
+    expect(spill(c.zAccepted)).toEqual(FLEET.map((u) => ok(u.z, u.guaranteed.z, 'impedance')));
+    expect(spill(c.ratioAccepted)).toEqual(FLEET.map((u) => ok(measuredRatio(u), turnsRatio(u.hvV, u.lvV, u.vectorGroup), 'ratio', u.z)));
+    (spill(c.totalLimit) as number[]).forEach((limit, i) => expect(limit).toBeCloseTo((FLEET[i]!.guaranteed.p0W + FLEET[i]!.guaranteed.pkW) * 1.1, 8));
+    // The invented guarantees show each kind of outcome: all pass, components pass but not the total,
+    // losses fail, impedance fails, one component fails with the total passing.
+    const failing = (col: string) => FLEET.filter((_, i) => spill(col)[i] === false).map((u) => u.id);
+    expect(failing(c.totalAccepted)).toEqual(['FH-02', 'FH-07']);
+    expect(failing(c.p0Accepted)).toEqual(['FH-07', 'FH-14']);
+    expect(failing(c.zAccepted)).toEqual(['FH-10']);
+    expect(failing(c.ratioAccepted)).toEqual(['FH-04', 'FH-10']);
+  });
+
   it('the year’s hot-spot, aging and life used are those of the thermal core on the same loads and ambients', async () => {
     const loads = yearOfLoads();
     const ambients = yearOfAmbients();
-    const model = [1, 'ONAN', undefined, undefined, undefined, 'IEEE'] as const;
-    const hotSpots = hotSpotProfile(loads, ambients, ...model);
-    const used = lifeUsedHours(loads, ambients, ...model, 'upgraded');
-    expect(summary.year.peakHotSpotC).toBeCloseTo(hotSpots.reduce((a, b) => Math.max(a, b)), 10);
-    expect(summary.year.equivalentAging).toBeCloseTo(equivalentAging(loads, ambients, ...model, 'upgraded'), 14);
-    expect(summary.year.lifeUsedHours).toBeCloseTo(used, 9);
-    expect(summary.year.lifeFraction).toBeCloseTo(lifeFraction(used), 15);
-    expect(summary.year.lifeFraction).toBeCloseTo(used / 180_000, 15);
+    // FH-03's own thermal data: its heat-run report's rises and R = Pk/P0 = 16,900 / 2,160.
+    expect(YEAR_THERMAL_DATA.lossRatio).toBeCloseTo(7.824, 3);
+    const core = loadingYear(loads, ambients, { cooling: 'ONAN', data: YEAR_THERMAL_DATA });
+    expect(summary.year.peakHotSpotC).toBeCloseTo(core.peakHotSpot, 10);
+    expect(summary.year.equivalentAging).toBeCloseTo(core.equivalentAging, 14);
+    expect(summary.year.lifeUsedHours).toBeCloseTo(core.lifeUsedHours, 9);
+    expect(summary.year.lifeFraction).toBeCloseTo(core.lifeFraction, 15);
+    expect(summary.year.lifeFraction).toBeCloseTo(core.lifeUsedHours / 180_000, 15);
     // A lightly loaded unit in a temperate climate ages far slower than at a steady 110 °C.
     expect(summary.year.equivalentAging).toBeLessThan(0.1);
 
@@ -136,16 +167,56 @@ describe('the Fernhill Works demo', () => {
     const profile = wb.getWorksheet('Profile')!;
     const p = PROFILE_COLUMNS;
     const anchor = profile.getCell(`${p.hotSpot}2`).value as { formula: string; ref: string; shareType: string };
-    expect(anchor.formula).toBe(`_xldudf_XFMR_HOTSPOTS(B2:B${HOURS + 1},C2:C${HOURS + 1},1,"ONAN")`);
+    expect(anchor.formula).toBe(`_xldudf_XFMR_HOTSPOTS(B2:B${HOURS + 1},C2:C${HOURS + 1},1,Summary!$D$2:$E$15)`);
     expect(anchor).toMatchObject({ shareType: 'array', ref: `${p.hotSpot}2:${p.hotSpot}${HOURS + 1}` });
-    for (const h of [0, 1, 4000, HOURS - 1]) expect(profile.getCell(`${p.hotSpot}${h + 2}`).result ?? profile.getCell(`${p.hotSpot}${h + 2}`).value).toBeCloseTo(hotSpots[h]!, 10);
+    for (const h of [0, 1, 4000, HOURS - 1]) expect(profile.getCell(`${p.hotSpot}${h + 2}`).result ?? profile.getCell(`${p.hotSpot}${h + 2}`).value).toBeCloseTo(core.hotSpots[h]!, 10);
     expect(profile.getCell(`${p.hotSpot}${HOURS + 2}`).value).toBeNull();
 
     const results = await recalculated(readFileSync(summary.files[1]!));
     const at = (cell: string) => results.find((r) => r.sheet === 'Summary' && r.cell === cell)!.value as number;
     const hottest = Math.max(...ambients);
     expect(at(YEAR_CELLS.hottestAmbient)).toBe(hottest);
-    expect(at(YEAR_CELLS.maxLoadHottest)).toBeCloseTo(maxLoadForHotSpot(hottest, 110, 'ONAN', undefined, undefined, undefined, 'IEEE'), 12);
+    const unit = thermalModel('IEEE', 'ONAN', YEAR_THERMAL_DATA);
+    expect(at(YEAR_CELLS.maxLoadHottest)).toBeCloseTo(maxSteadyLoad(unit, hottest, 110), 12);
+  });
+
+  it('the year sheet answers "can FH-03 carry its load?" with the loading core on its own thermal data', async () => {
+    const loads = yearOfLoads();
+    const ambients = yearOfAmbients();
+    const unit = thermalModel('IEEE', 'ONAN', YEAR_THERMAL_DATA);
+    const results = await recalculated(readFileSync(summary.files[1]!));
+    const at = (cell: string) => results.find((r) => r.sheet === 'Summary' && r.cell === cell)!.value;
+    const check = profileCheck(unit, loads, ambients, 1, 'normal', 'distribution');
+    expect(at(YEAR_CELLS.loadOk)).toBe(check.withinLimits);
+    expect(at(YEAR_CELLS.loadOk)).toBe(true);
+    const factor = cyclicMax(unit, loads, ambients, 1, 'normal', 'distribution').factor;
+    expect(at(YEAR_CELLS.cyclicMax) as number).toBeCloseTo(factor, 12);
+    expect(factor).toBeGreaterThan(1);
+    // After the peak of its hottest day, at that day's hottest ambient, 1.3 per unit until 120 °C:
+    const day = hottestDay(loads, ambients);
+    const dayLoads = loads.subarray(day * 24, day * 24 + 24);
+    const peak = Math.max(...dayLoads);
+    const ambient = Math.max(...ambients.subarray(day * 24, day * 24 + 24));
+    expect(at(YEAR_CELLS.hottestDayPeak)).toBe(peak);
+    const hours = overloadTime(unit, peak, 1.3, ambient, 120).hours;
+    expect(at(YEAR_CELLS.overload120) as number).toBeCloseTo(hours, 9);
+    expect(hotSpotAfterStep(unit, peak, 1.3, hours, ambient)).toBeCloseTo(120, 6);
+    expect(at(YEAR_CELLS.settlesAt13) as number).toBeCloseTo(steadyHotSpot(unit, 1.3, ambient), 12);
+
+    // The two spills: the heat-run block every thermal formula reads, and the LOADCHECK report.
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.readFile(summary.files[1]!);
+    const sheet = wb.getWorksheet('Summary')!;
+    const cell = (a: string) => {
+      const c = sheet.getCell(a);
+      return c.result ?? c.value;
+    };
+    expect(cell('D6')).toBe('loss ratio R');
+    expect(cell('E6') as number).toBeCloseTo(YEAR_THERMAL_DATA.lossRatio, 12);
+    expect(cell(YEAR_BLOCKS.check)).toBe('category');
+    expect(cell('E21') as number).toBeCloseTo(check.peakHotSpot, 9);
+    expect(cell('D28')).toBe('first limit exceeded');
+    expect(cell('E28')).toBe('none');
   });
 
   it('the bid sheet: each TOC is the cost core’s, the offer below the DOE 2016 minimum is flagged, the lowest compliant TOC wins', async () => {

@@ -13,7 +13,8 @@ describe('currents', () => {
     const line = ratedCurrent(1000, 13200, 3);
     expect(windingCurrent(1000, 13200, 'D', 3)).toBeCloseTo(line / Math.sqrt(3), 9);
     expect(windingCurrent(1000, 13200, 'yn', 3)).toBeCloseTo(line, 9);
-    expect(windingCurrent(1000, 13200, 'Dyn11', 3)).toBeCloseTo(line / Math.sqrt(3), 9);
+    expect(windingCurrent(1000, 13200, 'Dyn11', 3, 'HV')).toBeCloseTo(line / Math.sqrt(3), 9);
+    expect(() => windingCurrent(1000, 13200, 'Dyn11', 3)).toThrow(/names both windings.*"D" for the HV side, "yn" for the LV side/);
     expect(() => windingCurrent(1000, 13200, 'X', 3)).toThrow(/vector_letter/);
   });
   it('kVA from current inverts rated current', () => {

@@ -102,13 +102,13 @@ describe('meetsEfficiencyRule', () => {
     // 50 % load: 250 kW out, 400 + 0.25 × 3600 = 1300 W lost → 99.48 %
     expect(meetsEfficiencyRule(500, 400, 3600, 'DOE', 'liquid', 3, 2016, undefined)).toBe(true);
     expect(meetsEfficiencyRule(500, 400, 3600, 'EU', 'liquid', 3, 2016, undefined)).toBe(true);
-    expect(meetsEfficiencyRule(500, 400, 3600, 'both', 'liquid', 3, 2016, undefined)).toBe(true);
+    expect(meetsEfficiencyRule(500, 400, 3600, 'both', 'liquid', 3, 2016, undefined, 400, 3600)).toBe(true);
   });
   it('a unit that meets the DOE efficiency but exceeds the EU no-load limit fails "EU" and "both"', () => {
     // 520 + 0.25 × 3000 = 1270 W lost → 99.49 % ≥ 99.35 %; but P0 520 W > 459 W
     expect(meetsEfficiencyRule(500, 520, 3000, 'DOE', 'liquid', 3, 2016, undefined)).toBe(true);
     expect(meetsEfficiencyRule(500, 520, 3000, 'EU', 'liquid', 3, 2016, undefined)).toBe(false);
-    expect(meetsEfficiencyRule(500, 520, 3000, 'both', 'liquid', 3, 2016, undefined)).toBe(false);
+    expect(meetsEfficiencyRule(500, 520, 3000, 'both', 'liquid', 3, 2016, undefined, 520, 3000)).toBe(false);
   });
   it('the boundary: exactly the minimum efficiency passes, a watt more loss fails', () => {
     // η = 250 000 / (250 000 + L) = 0.9935 → L = 250 000 × 0.0065 / 0.9935
@@ -123,6 +123,6 @@ describe('meetsEfficiencyRule', () => {
   });
   it('the EU table has no row for single-phase or dry-type units', () => {
     expect(() => meetsEfficiencyRule(50, 100, 600, 'EU', 'liquid', 1, 2016, undefined)).toThrow(NotInTableError);
-    expect(() => meetsEfficiencyRule(500, 400, 3600, 'both', 'lvdry', 3, 2016, undefined)).toThrow(/three-phase liquid/);
+    expect(() => meetsEfficiencyRule(500, 400, 3600, 'both', 'lvdry', 3, 2016, undefined, 400, 3600)).toThrow(/three-phase liquid/);
   });
 });

@@ -6,19 +6,19 @@ import {
   equivalentAging,
   hotSpotProfile,
   hotSpotSeriesInto,
-  hotSpotSteady,
   IEC_DISTRIBUTION_ONAN,
   IEC_POWER,
   IEEE_ROWS,
   lifeFraction,
   lifeUsedHours,
-  maxLoadForHotSpot,
+  loadingYear,
   maxSteadyLoad,
   relativeAgingRate,
   steadyHotSpot,
   THERMAL_ROWS,
   thermalModel,
   ultimateHotSpotGradient,
+  topOilProfile,
   ultimateTopOilRise,
 } from '../../src/core/thermal';
 
@@ -37,18 +37,42 @@ function argumentOf(fn: () => unknown): string {
 
 describe('choosing the table row', () => {
   it('takes the IEC distribution row for IEC ONAN and the power rows otherwise', () => {
-    expect(thermalModel('ONAN', 'IEC', undefined, undefined, undefined)).toBe(IEC_DISTRIBUTION_ONAN);
-    expect(thermalModel('ONAN', 'IEC-POWER', undefined, undefined, undefined)).toBe(IEC_POWER.ONAN);
-    expect(thermalModel('ONAF', 'IEC', undefined, undefined, undefined)).toBe(IEC_POWER.ONAF);
-    expect(thermalModel('OD', 'IEEE', undefined, undefined, undefined)).toBe(IEEE_ROWS.OD);
+    expect(thermalModel('IEC', 'ONAN')).toBe(IEC_DISTRIBUTION_ONAN);
+    expect(thermalModel('IEC-POWER', 'ONAN')).toBe(IEC_POWER.ONAN);
+    expect(thermalModel('IEC', 'ONAF')).toBe(IEC_POWER.ONAF);
+    expect(thermalModel('IEEE', 'OD')).toBe(IEEE_ROWS.OD);
+    expect(thermalModel('IEEE', 'ONAN', { topOilRise: undefined })).toBe(IEEE_ROWS.ONAN);
   });
 
   it("replaces the rated values with the unit's own and checks them by name", () => {
-    const m = thermalModel('ONAN', 'IEEE', 50, 20, 4);
+    const m = thermalModel('IEEE', 'ONAN', { topOilRise: 50, hotSpotGradient: 20, lossRatio: 4 });
     expect([m.topOilRise, m.hotSpotGradient, m.lossRatio, m.oilExponent]).toEqual([50, 20, 4, 0.8]);
-    expect(argumentOf(() => thermalModel('ONAN', 'IEEE', 0, undefined, undefined))).toBe('top_oil_rise');
-    expect(argumentOf(() => thermalModel('ONAN', 'IEEE', undefined, 150, undefined))).toBe('hs_gradient');
-    expect(argumentOf(() => thermalModel('ONAN', 'IEEE', undefined, undefined, -1))).toBe('loss_ratio');
+    expect(argumentOf(() => thermalModel('IEEE', 'ONAN', { topOilRise: 0 }))).toBe('top_oil_rise');
+    expect(argumentOf(() => thermalModel('IEEE', 'ONAN', { hotSpotGradient: 150 }))).toBe('hs_gradient');
+    expect(argumentOf(() => thermalModel('IEEE', 'ONAN', { lossRatio: -1 }))).toBe('loss_ratio');
+  });
+
+  it('takes every other thermal parameter from the unit too, each checked by its argument name', () => {
+    const m = thermalModel('IEC', 'ONAF', {
+      oilTimeConstant: 120, windingTimeConstant: 6, oilExponent: 0.9, windingExponentM: 0.7, k11: 0.6, k21: 1.8, k22: 1.5, paper: 'upgraded', normalLifeHours: 150_000,
+    });
+    expect([m.oilTimeConstant, m.windingTimeConstant, m.oilExponent, m.windingExponent, m.k11, m.k21, m.k22, m.paper, m.normalLifeHours])
+      .toEqual([120, 6, 0.9, 1.4, 0.6, 1.8, 1.5, 'upgraded', 150_000]);
+    expect(argumentOf(() => thermalModel('IEEE', 'ONAN', { oilTimeConstant: -1 }))).toBe('tau_oil_min');
+    expect(argumentOf(() => thermalModel('IEEE', 'ONAN', { windingTimeConstant: 0 }))).toBe('tau_winding_min');
+    expect(argumentOf(() => thermalModel('IEEE', 'ONAN', { oilExponent: 3 }))).toBe('n');
+    expect(argumentOf(() => thermalModel('IEEE', 'ONAN', { windingExponentM: 0.1 }))).toBe('m');
+    expect(argumentOf(() => thermalModel('IEC', 'ONAN', { k21: 0.5 }))).toBe('k21');
+    expect(argumentOf(() => thermalModel('IEC', 'ONAN', { normalLifeHours: 5 }))).toBe('normal_life_h');
+  });
+
+  it('reads an IEC heat-run report as H · gr when the hot-spot factor is given', () => {
+    expect(thermalModel('IEC', 'ONAN', { hotSpotGradient: 20, hotSpotFactor: 1.2 }).hotSpotGradient).toBeCloseTo(24, 12);
+    expect(argumentOf(() => thermalModel('IEC', 'ONAN', { hotSpotFactor: 1.2 }))).toBe('hs_factor');
+  });
+
+  it('ages IEEE rows on upgraded paper and the IEC rows, rated at 98 °C, on kraft paper', () => {
+    for (const row of THERMAL_ROWS) expect(row.paper).toBe(row.method === 'IEEE' ? 'upgraded' : 'normal');
   });
 });
 
@@ -66,9 +90,9 @@ describe('steady state', () => {
   });
 
   it('refuses ambient outside -60 to 60 °C and loads out of range, by name', () => {
-    expect(argumentOf(() => hotSpotSteady(1, 61, 'ONAN', undefined, undefined, undefined, 'IEEE'))).toBe('ambient_c');
-    expect(argumentOf(() => hotSpotSteady(-0.1, 20, 'ONAN', undefined, undefined, undefined, 'IEEE'))).toBe('load');
-    expect(argumentOf(() => hotSpotSteady(1000, 20, 'ONAN', undefined, undefined, undefined, 'IEEE'))).toBe('load');
+    expect(argumentOf(() => steadyHotSpot(IEEE_ROWS.ONAN, 1, 61))).toBe('ambient_c');
+    expect(argumentOf(() => steadyHotSpot(IEEE_ROWS.ONAN, -0.1, 20))).toBe('load');
+    expect(argumentOf(() => steadyHotSpot(IEEE_ROWS.ONAN, 1000, 20))).toBe('load');
   });
 });
 
@@ -83,8 +107,8 @@ describe('largest steady load for a hot-spot limit', () => {
   });
 
   it('is exactly rated load at the rated point of each guide', () => {
-    expect(maxLoadForHotSpot(30, 110, 'ONAN', undefined, undefined, undefined, 'IEEE')).toBeCloseTo(1, 12);
-    expect(maxLoadForHotSpot(20, 98, 'ONAN', undefined, undefined, undefined, 'IEC')).toBeCloseTo(1, 12);
+    expect(maxSteadyLoad(IEEE_ROWS.ONAN, 30, 110)).toBeCloseTo(1, 12);
+    expect(maxSteadyLoad(IEC_DISTRIBUTION_ONAN, 20, 98)).toBeCloseTo(1, 12);
   });
 
   it('falls as the ambient rises', () => {
@@ -98,6 +122,7 @@ describe('largest steady load for a hot-spot limit', () => {
 
   it('refuses an implausible limit by name', () => {
     expect(argumentOf(() => maxSteadyLoad(IEEE_ROWS.ONAN, 20, 500))).toBe('limit_c');
+    expect(argumentOf(() => maxSteadyLoad(IEEE_ROWS.ONAN, 60, 60))).toBe('limit_c');
   });
 });
 
@@ -121,13 +146,23 @@ describe('transient kernel', () => {
     }
   });
 
-  it('gives the same end-of-hour values with quarter-hour steps: each step is solved exactly', () => {
+  it('gives the same end-of-hour values with quarter-hour steps where the time constants are fixed: each step is solved exactly', () => {
     const hourly = Float64Array.from({ length: 24 }, (_, i) => 0.5 + (i % 7) / 6);
     const quarter = Float64Array.from({ length: 96 }, (_, j) => hourly[Math.floor(j / 4)]!);
-    for (const row of THERMAL_ROWS) {
+    for (const row of THERMAL_ROWS.filter((r) => r.method === 'IEC' || r.oilExponent === 1)) {
       const a = hotSpotSeriesInto(row, hourly, one(15), 1, new Float64Array(24));
       const b = hotSpotSeriesInto(row, quarter, one(15), 0.25, new Float64Array(96));
       for (let i = 0; i < 24; i++) expect(a[i]).toBeCloseTo(b[4 * i + 3]!, 9);
+    }
+  });
+
+  it("IEEE's step-dependent top-oil time constant (n ≠ 1) moves the end-of-hour values by well under a kelvin between hourly and quarter-hour steps", () => {
+    const hourly = Float64Array.from({ length: 24 }, (_, i) => 0.5 + (i % 7) / 6);
+    const quarter = Float64Array.from({ length: 96 }, (_, j) => hourly[Math.floor(j / 4)]!);
+    for (const row of THERMAL_ROWS.filter((r) => r.method === 'IEEE' && r.oilExponent !== 1)) {
+      const a = hotSpotSeriesInto(row, hourly, one(15), 1, new Float64Array(24));
+      const b = hotSpotSeriesInto(row, quarter, one(15), 0.25, new Float64Array(96));
+      for (let i = 0; i < 24; i++) expect(Math.abs(a[i]! - b[4 * i + 3]!)).toBeLessThan(0.5);
     }
   });
 
@@ -160,29 +195,32 @@ describe('transient kernel', () => {
 });
 
 describe('profiles: checks, aging and life', () => {
-  const none = [undefined, undefined, undefined] as const;
-
   it('names the step of a bad load and the length of a bad ambient range', () => {
-    expect(argumentOf(() => hotSpotProfile(Float64Array.of(1, -1), one(20), 1, 'ONAN', ...none, 'IEEE'))).toBe('loads (step 2)');
-    expect(argumentOf(() => hotSpotProfile(Float64Array.of(1, 1, 1), Float64Array.of(20, 21), 1, 'ONAN', ...none, 'IEEE'))).toBe('ambients');
-    expect(argumentOf(() => hotSpotProfile(Float64Array.of(1), Float64Array.of(99), 1, 'ONAN', ...none, 'IEEE'))).toBe('ambients (step 1)');
-    expect(argumentOf(() => hotSpotProfile(Float64Array.of(1), one(20), 0, 'ONAN', ...none, 'IEEE'))).toBe('hours');
-    expect(argumentOf(() => hotSpotProfile(new Float64Array(0), one(20), 1, 'ONAN', ...none, 'IEEE'))).toBe('loads');
+    expect(argumentOf(() => hotSpotProfile(IEEE_ROWS.ONAN, Float64Array.of(1, -1), one(20), 1))).toBe('loads (step 2)');
+    expect(argumentOf(() => hotSpotProfile(IEEE_ROWS.ONAN, Float64Array.of(1, 1, 1), Float64Array.of(20, 21), 1))).toBe('ambients');
+    expect(argumentOf(() => hotSpotProfile(IEEE_ROWS.ONAN, Float64Array.of(1), Float64Array.of(99), 1))).toBe('ambients (step 1)');
+    expect(argumentOf(() => hotSpotProfile(IEEE_ROWS.ONAN, Float64Array.of(1), one(20), 0))).toBe('hours');
+    expect(argumentOf(() => hotSpotProfile(IEEE_ROWS.ONAN, new Float64Array(0), one(20), 1))).toBe('loads');
   });
 
   it('ages at the normal rate at the rated point: F_EQA 1, one hour of life per hour', () => {
     const year = filled(8760, 1);
-    expect(equivalentAging(year, one(30), 1, 'ONAN', ...none, 'IEEE', 'upgraded')).toBeCloseTo(1, 10);
-    expect(lifeUsedHours(year, one(30), 1, 'ONAN', ...none, 'IEEE', 'upgraded')).toBeCloseTo(8760, 6);
-    expect(equivalentAging(year, one(20), 1, 'ONAN', ...none, 'IEC', 'normal')).toBeCloseTo(1, 10);
+    expect(equivalentAging(IEEE_ROWS.ONAN, year, one(30), 1)).toBeCloseTo(1, 10);
+    expect(lifeUsedHours(IEEE_ROWS.ONAN, year, one(30), 1)).toBeCloseTo(8760, 6);
+    // IEC's default paper is kraft, rated at 98 °C: its rated point ages at the normal rate.
+    expect(equivalentAging(IEC_DISTRIBUTION_ONAN, year, one(20), 1)).toBeCloseTo(1, 10);
+    expect(equivalentAging(IEC_DISTRIBUTION_ONAN, year, one(20), 1, 'upgraded')).toBeCloseTo(relativeAgingRate(98, 'upgraded'), 10);
   });
 
-  it('F_EQA is the time-weighted mean of the step aging rates', () => {
+  it('F_EQA is the time-weighted mean of the aging rate when each step holds its hot-spot', () => {
+    // Steps long enough to settle (1,000 h against τo = 150 min): the end-of-step hot-spot is the
+    // step's but for the first hours after each change.
     const loads = Float64Array.of(0.5, 1.1, 1.3, 0.9);
-    const hs = hotSpotProfile(loads, one(25), 2, 'ONAF', ...none, 'IEEE');
+    const hs = hotSpotProfile(IEEE_ROWS.ONAF, loads, one(25), 1000);
     const mean = Array.from(hs, (t) => agingAccelerationFactor(t)).reduce((s, v) => s + v) / 4;
-    expect(equivalentAging(loads, one(25), 2, 'ONAF', ...none, 'IEEE', 'upgraded')).toBeCloseTo(mean, 12);
-    expect(lifeUsedHours(loads, one(25), 2, 'ONAF', ...none, 'IEEE', 'upgraded')).toBeCloseTo(mean * 8, 12);
+    const feqa = equivalentAging(IEEE_ROWS.ONAF, loads, one(25), 1000);
+    expect(Math.abs(feqa / mean - 1)).toBeLessThan(0.01);
+    expect(lifeUsedHours(IEEE_ROWS.ONAF, loads, one(25), 1000) / 4000).toBeCloseTo(feqa, 12);
   });
 
   it('refuses a hot-spot outside the aging laws, by name', () => {
@@ -193,5 +231,21 @@ describe('profiles: checks, aging and life', () => {
   it('gives life as a fraction of the 180,000 h normal life', () => {
     expect(lifeFraction(8760)).toBeCloseTo(8760 / 180_000, 15);
     expect(lifeFraction(9000, 150_000)).toBeCloseTo(0.06, 15);
+  });
+
+  it('loadingYear gives the demo everything at once', () => {
+    const loads = Float64Array.from({ length: 8760 }, (_, i) => 0.6 + 0.4 * Math.sin((2 * Math.PI * i) / 24));
+    const ambients = Float64Array.from({ length: 8760 }, (_, i) => 10 + 12 * Math.sin((2 * Math.PI * (i - 2000)) / 8760));
+    const y = loadingYear(loads, ambients);
+    expect(y.hotSpots).toHaveLength(8760);
+    expect(y.peakHotSpot).toBe(Math.max(...y.hotSpots));
+    expect(y.lifeUsedHours).toBeCloseTo(y.equivalentAging * 8760, 6);
+    expect(y.lifeFraction).toBeCloseTo(y.lifeUsedHours / 180_000, 12);
+    expect([y.paper, y.referenceHotSpot, y.model]).toEqual(['upgraded', 110, IEEE_ROWS.ONAN]);
+    expect(y.lifeUsedHours).toBeCloseTo(lifeUsedHours(IEEE_ROWS.ONAN, loads, ambients, 1), 9);
+    expect(y.topOils).toEqual(topOilProfile(IEEE_ROWS.ONAN, loads, ambients, 1));
+    const kraft = loadingYear(loads, ambients, { method: 'IEC' });
+    expect([kraft.paper, kraft.referenceHotSpot]).toEqual(['normal', 98]);
+    expect(loadingYear(loads, ambients, { data: { lossRatio: 7.8 } }).model.lossRatio).toBe(7.8);
   });
 });

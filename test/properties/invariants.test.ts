@@ -8,7 +8,7 @@ import { describe, expect, it } from 'vitest';
 import { allDayEfficiency, energyLost } from '../../src/core/energy';
 import { efficiencyAt, maxEfficiency, maxEfficiencyLoad } from '../../src/core/efficiency';
 import { totalLossesAt } from '../../src/core/losses';
-import { agingRateSum, lifeUsedHours } from '../../src/core/thermal';
+import { agingRateSum, IEEE_ROWS, lifeUsedHours } from '../../src/core/thermal';
 import { idealOutputCurrent, idealOutputVoltage } from '../../src/core/ratio';
 
 const kva = fc.double({ min: 5, max: 100_000, noNaN: true });
@@ -89,7 +89,7 @@ describe('invariants', () => {
         // 30 + 55 + 25 = 110 °C (65 °C-rise design, common practice).
         const loads = new Float64Array(steps).fill(1);
         const ambients = Float64Array.of(30);
-        const used = lifeUsedHours(loads, ambients, hours, 'ONAN', undefined, undefined, undefined, 'IEEE', 'upgraded');
+        const used = lifeUsedHours(IEEE_ROWS.ONAN, loads, ambients, hours, 'upgraded');
         expect(Math.abs(used - steps * hours) / (steps * hours)).toBeLessThan(1e-9);
       }),
       { numRuns: 200 },

@@ -37,3 +37,19 @@ describe('loss capitalisation worked example', () => {
     expect(Math.abs(b * 1000 - 1280) / 1280).toBeLessThan(0.005);
   });
 });
+
+describe('demand charge and responsibility factor in A and B (IEEE C57.120 loss evaluation, from memory)', () => {
+  it('a demand charge alone is worth demand / 1000 × PW a watt of no-load loss', () => {
+    // Source: @formulajs/formulajs PV for the present-worth factor.
+    const pw = -(formulajs.PV(0.07, 20, 1) as number);
+    expect(noLoadLossWorth(0, 0.07, 20, 8760, 95)).toBeCloseTo((95 / 1000) * pw, 10);
+  });
+  it('the load-loss share carries the square of the unit’s load at the system peak', () => {
+    // Load loss at the system peak is Pk × (responsibility × peak)² (load loss goes with current², common practice).
+    const pw = -(formulajs.PV(0.07, 20, 1) as number);
+    expect(loadLossWorth(0, 0.3, 0.8, 0.07, 20, 8760, 95, 0.9)).toBeCloseTo((95 / 1000) * pw * 0.81 * 0.64, 10);
+  });
+  it('without a demand charge A and B are the energy terms alone', () => {
+    expect(loadLossWorth(0.1, 0.3, 0.8, 0.07, 20, 8760, 0, 0.5)).toBeCloseTo(loadLossWorth(0.1, 0.3, 0.8, 0.07, 20, 8760), 12);
+  });
+});

@@ -5,7 +5,7 @@
  */
 import * as math from 'mathjs';
 import { describe, expect, it } from 'vitest';
-import { xfmr } from '../support/cells';
+import { errorOf, xfmr } from '../support/cells';
 
 describe('current and power', () => {
   it('1000 kVA at 480 V three-phase is 1202.8 A — common practice (I = S/(√3·V)); mathjs units', () => {
@@ -34,5 +34,22 @@ describe('current and power', () => {
     const zs = math.evaluate('(480 V)^2 / (500 MVA)');
     const amps = math.divide(math.unit(480, 'V'), math.multiply(Math.sqrt(3), math.add(zt, zs))) as math.Unit;
     expect(xfmr('ISC', 1000, 480, 0.0575, 500)).toBeCloseTo(amps.toNumber('A'), 6);
+  });
+});
+
+describe('IWINDING with a vector group', () => {
+  it('1000 kVA at 480 V on the star (LV) side of Dyn11 carries 1,202.8 A — common practice (S = √3·V·I, star = line current)', () => {
+    // Before: 694.4 A, the HV delta letter applied to the LV voltage.
+    expect(xfmr('IWINDING', 1000, 480, 'Dyn11', 3, 'LV')).toBeCloseTo(1202.8, 1);
+    expect(xfmr('IWINDING', 1000, 480, 'yn')).toBeCloseTo(1202.8, 1);
+    expect(xfmr('IWINDING', 1000, 480, 'Dyn11', 3, 'LV')).toBeCloseTo(math.evaluate('1000 kVA / (sqrt(3) * 480 V)').toNumber('A'), 9);
+  });
+  it('the HV delta of the same unit at 13.2 kV carries line current / √3 — common practice', () => {
+    expect(xfmr('IWINDING', 1000, 13200, 'Dyn11', 3, 'HV')).toBeCloseTo((xfmr('IRATED', 1000, 13200) as number) / Math.sqrt(3), 9);
+  });
+  it('a whole vector group without a side is refused, saying what to type', () => {
+    expect(errorOf(xfmr('IWINDING', 1000, 480, 'Dyn11')).message).toMatch(
+      /argument vector_letter: "Dyn11" names both windings; type the letter .*"D" for the HV side, "yn" for the LV side/,
+    );
   });
 });

@@ -35,3 +35,16 @@ describe('UL K-factor definition', () => {
     expect(kFactor(Float64Array.of(1, 3), Float64Array.of(0.8, 0.6))).toBeCloseTo(0.64 + 0.36 * 9, 12);
   });
 });
+
+describe('K-factor of a spectrum in per cent of the fundamental (basis "fundamental")', () => {
+  it('the six-pulse spectrum as a meter reports it (100 %, 20 %, 14 % …) gives the sheet’s 8.3476', () => {
+    // Same source as above: the sheet's K-factor is taken with the spectrum scaled to its rms.
+    const percent = perFundamental.map((x) => x * 100);
+    expect(kFactor(orders, percent, 'fundamental')).toBeCloseTo(8.3476, 3);
+    expect(kFactor(orders, perFundamental, 'fundamental')).toBeCloseTo(8.3476, 3);
+  });
+  it('the same per-cent spectrum on the default basis "rated" is refused, naming the basis', () => {
+    const percent = perFundamental.map((x) => x * 100);
+    expect(() => kFactor(orders, percent)).toThrow(/argument currents: .*basis "fundamental"/);
+  });
+});

@@ -13,10 +13,12 @@ import {
   EU_TIER2_LIQUID,
   euMaximumLoss,
   findDoeTable,
+  meetsEfficiencyRule,
   type BilBand,
   type DoeKind,
   type DoeLevels,
 } from '../../src/core/efficiencyRules';
+import { NotInTableError } from '../../src/core/errors';
 
 /** "kVA % kVA %" lines; "-" where a column is blank. */
 function twoColumns(text: string): { one: [number, number][]; three: [number, number][] } {
@@ -213,6 +215,39 @@ describe('ratings between rows, as the regulation directs', () => {
   });
 });
 
+describe('units outside the regulation have no minimum (10 CFR 431.192 definition)', () => {
+  // Source: 10 CFR 431.192, "Distribution transformer means a transformer that (1) has an input
+  // voltage of 34.5 kV or less; (2) has an output voltage of 600 V or less; (3) is rated for
+  // operation at a frequency of 60 Hz" (laws9.com/cfr/text/10/431/192; the same limits in
+  // 42 U.S.C. 6291(35) at law.cornell.edu).
+  it('a 69 kV primary or a 4,160 V secondary is #N/A, not a silent number', () => {
+    expect(() => doeMinimumEfficiency(1000, 'liquid', 3, 2016, undefined, 69000, 480)).toThrow(NotInTableError);
+    expect(() => doeMinimumEfficiency(1000, 'liquid', 3, 2016, undefined, 12470, 4160)).toThrow(/argument lv_v: 4160 V is above 600 V/);
+  });
+  it('34.5 kV and 600 V themselves are in scope', () => {
+    expect(doeMinimumEfficiency(1000, 'liquid', 3, 2016, undefined, 34500, 600)).toBeCloseTo(0.9943, 12);
+  });
+  it('"lvdry" with a medium-voltage primary, or "mvdry" with a 480 V one, is refused as the wrong kind', () => {
+    expect(() => doeMinimumEfficiency(75, 'lvdry', 3, 2016, undefined, 4160, 208)).toThrow(/argument kind: "lvdry"/);
+    expect(() => doeMinimumEfficiency(75, 'mvdry', 3, 2016, 95, 480, 208)).toThrow(/argument kind: "mvdry"/);
+  });
+});
+
+describe('COMPLIES "both": each rule judges its own losses', () => {
+  // Source: 10 CFR 431 subpart K appendix A (the DOE test procedure: liquid-immersed load loss at
+  // 55 °C, no-load loss at 20 °C, 60 Hz) against the IEC 60076-1 reference temperature of 75 °C
+  // the EU rule uses: one pair of losses cannot stand for both.
+  it('refuses "both" without the EU pair, naming the argument', () => {
+    expect(() => meetsEfficiencyRule(500, 400, 3600, 'both', 'liquid', 3, 2016, undefined)).toThrow(/argument p0_eu_w: is blank/);
+  });
+  it('a unit whose 75 °C load loss exceeds the EU limit fails "both" though its 55 °C one would pass', () => {
+    // 500 kVA: EU Pk max 3900 W (from memory). 3,600 W at 55 °C is some 3,850 W at 75 °C if all I²R
+    // (×309.5/289.5); a unit measuring 3,950 W at 75 °C fails the EU rule, whatever its 55 °C figure.
+    expect(meetsEfficiencyRule(500, 400, 3600, 'both', 'liquid', 3, 2016, undefined, 400, 3600)).toBe(true);
+    expect(meetsEfficiencyRule(500, 400, 3600, 'both', 'liquid', 3, 2016, undefined, 400, 3950)).toBe(false);
+  });
+});
+
 // EU Tier 2 maximum losses, from memory (docs/references.md, Regulations): the table is held to
 // the recalled values and to the structure of its levels (A0 − 10 %), which is no substitute for
 // the Official Journal text.
@@ -235,5 +270,18 @@ describe('EU Tier 2, Table I.1 (from memory)', () => {
       1250: 950, 1600: 1200, 2000: 1450, 2500: 1750, 3150: 2200,
     };
     for (const r of EU_TIER2_LIQUID) expect(Math.abs(r.p0W - a0[r.kva]! * 0.9)).toBeLessThanOrEqual(0.5);
+  });
+});
+
+describe('units outside Table I.1 get #N/A, not its numbers', () => {
+  // Source: Table I.1 of EU 548/2014 is headed for units with one winding Um ≤ 24 kV and the
+  // other Um ≤ 1.1 kV; pole-mounted units have their own table in Annex I (from memory).
+  it('a 36 kV unit, a second winding above 1.1 kV, and a pole-mounted unit', () => {
+    expect(() => euMaximumLoss(400, 'pk', 36, 1.1)).toThrow(NotInTableError);
+    expect(() => euMaximumLoss(400, 'pk', 24, 3.6)).toThrow(/argument lv_um_kv/);
+    expect(() => euMaximumLoss(160, 'p0', undefined, undefined, true)).toThrow(/argument pole_mounted: pole-mounted units have their own/);
+  });
+  it('24 kV and 1.1 kV themselves are in the table', () => {
+    expect(euMaximumLoss(400, 'pk', 24, 1.1)).toBe(3250);
   });
 });

@@ -143,8 +143,10 @@ function testProfile(steps: number, perHour: number): { loads: Float64Array; amb
  *   k22·τw·dΔθh1/dt = k21·Hgr·K^y − Δθh1
  *   (τo/k22)·dΔθh2/dt = (k21 − 1)·Hgr·K^y − Δθh2
  * IEEE C57.91 clause 7 (from memory): τ_TO·dΔθ_TO/dt = Δθ_TO,U − Δθ_TO, τ_w·dΔθ_H/dt = Δθ_H,U − Δθ_H,
- * with the top-oil rise over ambient as state. Integrated step by step with odex (inputs change at
- * step boundaries, so each step is its own initial-value problem).
+ * with the top-oil rise over ambient as state and, for n ≠ 1, the clause's time constant of the step
+ *   τ_TO = τ_TO,R · (Δθ_U/Δθ_R − Δθ_i/Δθ_R) / ((Δθ_U/Δθ_R)^(1/n) − (Δθ_i/Δθ_R)^(1/n))
+ * from the rise Δθ_i at the step's start. Integrated step by step with odex (inputs change at step
+ * boundaries, so each step is its own initial-value problem).
  */
 function odexHotSpots(row: ThermalCharacteristics, loads: Float64Array, ambients: Float64Array, stepMinutes: number): Float64Array {
   const { lossRatio: r, oilExponent: x, windingExponent: y, topOilRise: dor, hotSpotGradient: hgr } = row;
@@ -165,8 +167,11 @@ function odexHotSpots(row: ThermalCharacteristics, loads: Float64Array, ambients
     const a = ambients[i]!;
     const u = oilUltimate(k);
     const g = gradient(k);
+    const ui = state[0]! / dor;
+    const uu = u / dor;
+    const tauStep = x === 1 ? to : Math.abs(uu - ui) < 1e-12 ? to * x * uu ** (1 - 1 / x) : (to * (uu - ui)) / (uu ** (1 / x) - ui ** (1 / x));
     const f = ieee
-      ? (_t: number, s: number[]) => [(u - s[0]!) / to, (g - s[1]!) / tw, 0]
+      ? (_t: number, s: number[]) => [(u - s[0]!) / tauStep, (g - s[1]!) / tw, 0]
       : (_t: number, s: number[]) => [(u - (s[0]! - a)) / (k11 * to), (k21 * g - s[1]!) / (k22 * tw), ((k21 - 1) * g - s[2]!) / (to / k22)];
     state = solver.solve(f, 0, state, stepMinutes).y;
     out[i] = ieee ? a + state[0]! + state[1]! : state[0]! + state[1]! - state[2]!;

@@ -1,6 +1,6 @@
-import { apparentPowerKva, faultCurrent, ratedCurrent, windingCurrent } from '../../core/current';
-import { impedance, kva, phases, volts } from '../arguments';
-import { each, num, text } from '../declaration';
+import { apparentPowerKva, faultCurrent, ratedCurrent, windingCurrent, type WindingSide } from '../../core/current';
+import { blankable, impedance, kva, phases, volts, withSample } from '../arguments';
+import { choice, each, num, text } from '../declaration';
 
 const GROUP = 'Current and power';
 
@@ -17,13 +17,22 @@ export const IRATED = each({
 export const IWINDING = each({
   name: 'IWINDING',
   group: GROUP,
-  help: 'Current in one phase winding: line current / √3 in a delta winding, the line current in star or zigzag.',
+  help: 'Current in one phase winding: line current / √3 in a delta winding, the line current in star or zigzag. Give the letter of the winding v belongs to, or a whole vector group with side "HV" or "LV".',
   source: 'delta phase current = line current / √3 (common practice)',
   args: [
     kva,
     volts,
-    text('vector_letter', 'Connection of the winding: D, Y, YN, Z or ZN (either case).', 'D'),
+    text('vector_letter', 'Connection of the winding v belongs to: D, Y, YN, Z or ZN (either case); or a vector group such as Dyn11 together with side.', 'Dyn11'),
     phases,
+    withSample(
+      blankable(
+        choice('side', '"HV" or "LV": the winding of the vector group that v belongs to; needed only when vector_letter is a whole vector group.', {
+          options: ['HV', 'LV'] as const satisfies readonly WindingSide[],
+          aliases: { high: 'HV', low: 'LV', primary: 'HV', secondary: 'LV' },
+        }),
+      ),
+      'LV',
+    ),
   ],
   result: { type: 'number', unit: 'A' },
   compute: windingCurrent,

@@ -1,5 +1,5 @@
-import { harmonicDerating, harmonicLossFactor, kFactor } from '../../core/harmonics';
-import { each, num, series } from '../declaration';
+import { harmonicDerating, harmonicLossFactor, kFactor, type SpectrumBasis } from '../../core/harmonics';
+import { choice, each, num, series } from '../declaration';
 
 const GROUP = 'Losses';
 const orders = series('orders', 'order', 'Harmonic orders, 1 for the fundamental, e.g. 1, 5, 7, 11, 13.', [1, 5, 7, 11, 13]);
@@ -17,9 +17,16 @@ export const HLF = each({
 export const KFACTOR = each({
   name: 'KFACTOR',
   group: GROUP,
-  help: 'K-factor: Σ (I_h·h)² with each current per unit of the transformer’s rated current; a spectrum whose rms is 1 per unit gives the same value as HLF.',
+  help: 'K-factor: Σ (I_h·h)² with each current per unit of the transformer’s rated current (basis "rated", the default). A spectrum in per cent of the fundamental, as meters report it, needs basis "fundamental": it is then scaled to the rated rms current, and K equals HLF.',
   source: 'UL 1561/1562 K-factor definition',
-  args: [orders, series('currents', 'per unit', 'Current at each order per unit of rated current, e.g. 0.96, 0.19, 0.13.', [0.96, 0.19, 0.13, 0.087, 0.074])],
+  args: [
+    orders,
+    series('currents', 'per unit', 'Current at each order: per unit of rated current (basis "rated"), or of the fundamental (basis "fundamental").', [0.96, 0.19, 0.13, 0.087, 0.074]),
+    choice('basis', '"rated": currents per unit of rated current; "fundamental": per unit or per cent of the fundamental.', {
+      options: ['rated', 'fundamental'] as const satisfies readonly SpectrumBasis[],
+      default: 'rated',
+    }),
+  ],
   result: { type: 'number', unit: 'factor' },
   compute: kFactor,
 });

@@ -1,6 +1,6 @@
 import { loadLossAt, loadLossAtTemperature, totalLossesAt } from '../../core/losses';
-import { load, p0, pk } from '../arguments';
-import { choice, each, num } from '../declaration';
+import { load, lossStandard, material, p0, pk } from '../arguments';
+import { each, num } from '../declaration';
 
 const GROUP = 'Losses';
 
@@ -24,24 +24,24 @@ export const LOSSES = each({
   compute: totalLossesAt,
 });
 
+// Winding temperatures at which load loss is usually stated, for the help texts.
+const REFERENCE_TEMPERATURES =
+  '85 °C for 65 °C-rise liquid-immersed units (IEEE C57.12.00), 75 °C (IEC 60076-1), 55 °C for liquid-immersed and 75 °C for dry-type units under the US DOE test procedure (10 CFR 431 subpart K, appendix A)';
+
 export const LOSSTEMP = each({
   name: 'LOSSTEMP',
   group: GROUP,
-  help: 'Load loss moved from one winding temperature to another: the I²R part by (Tk + to)/(Tk + from), the stray part inversely. Without i2r_w the whole loss is treated as I²R.',
+  help: `Load loss moved from one winding temperature to another: the I²R part by (Tk + to)/(Tk + from), the stray part inversely. Usual reference temperatures: ${REFERENCE_TEMPERATURES}. With i2r_w blank the whole loss is taken as I²R when correcting hotter (the largest the result can be) and refused when correcting cooler, where that would understate the loss.`,
   source: 'IEEE C57.12.90 load-loss temperature correction; IEC 60076-1 clause 11.4 (from memory)',
   args: [
     pk,
     num('from_c', '°C', 'Winding temperature at which pk_w was measured.', 25),
-    num('to_c', '°C', 'Reference temperature wanted: 85 °C for 65 °C-rise units (IEEE), 75 °C (IEC).', 85),
-    num('i2r_w', 'W', 'The I²R part of pk_w at from_c (measured resistance × current²); blank treats all of pk_w as I²R.', 9000, {
+    num('to_c', '°C', 'Reference temperature wanted: 85 °C (IEEE, 65 °C rise), 75 °C (IEC), 55 °C (US DOE, liquid-immersed).', 85),
+    num('i2r_w', 'W', 'The I²R part of pk_w at from_c (measured resistance × current²); needed when to_c is below from_c, blank otherwise treats all of pk_w as I²R.', 9000, {
       optional: true,
     }),
-    choice('material', 'Winding conductor: "Cu" or "Al".', {
-      options: ['Cu', 'Al'],
-      aliases: { copper: 'Cu', aluminium: 'Al', aluminum: 'Al' },
-      default: 'Cu',
-    }),
-    choice('standard', '"IEEE" (copper Tk 234.5) or "IEC" (copper Tk 235); aluminium is 225 in both.', { options: ['IEEE', 'IEC'], default: 'IEEE' }),
+    material,
+    lossStandard,
   ],
   result: { type: 'number', unit: 'W' },
   compute: loadLossAtTemperature,

@@ -9,9 +9,7 @@
  * Σ V_n·Δt_n hours at the reference temperature (IEEE C57.91 clause 5, from memory).
  */
 import { nonNegative, positive, within } from '../guards';
-import { NORMAL_LIFE_HOURS } from './coolingTable';
-
-export type Paper = 'upgraded' | 'normal';
+import { NORMAL_LIFE_HOURS, type Paper } from './coolingTable';
 
 /** Arrhenius constant B = 15000 K and reference 110 °C = 383 K of the F_AA law. */
 const B = 15000;

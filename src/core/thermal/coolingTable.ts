@@ -20,6 +20,14 @@
  *    loss ratio and time constants of the IEC 60076-7 Table 4 row of the same cooling (from memory).
  */
 
+/**
+ * The insulation paper a row's rated point is designed around, and so the aging law applied by
+ * default: IEEE C57.91 rates 65 °C-rise units on thermally upgraded paper (aging rate 1 at 110 °C);
+ * the IEC 60076-7 Table 4 rows reach 98 °C at rated load and 20 °C ambient, the reference of
+ * non-upgraded kraft paper (both from memory; the tests check the rated points).
+ */
+export type Paper = 'upgraded' | 'normal';
+
 /** Cooling modes as IEC 60076-7 groups them; IEEE's OFAF/OFWF are OF, ODAF/ODWF are OD. */
 export type Cooling = 'ONAN' | 'ONAF' | 'OF' | 'OD';
 
@@ -58,8 +66,32 @@ export interface ThermalCharacteristics {
   readonly k11: number;
   readonly k21: number;
   readonly k22: number;
+  /** The paper whose aging law applies unless the unit's own is given (see Paper). */
+  readonly paper: Paper;
+  /** Hours of normal life at the paper's reference hot-spot, the divisor of a life fraction. */
+  readonly normalLifeHours: number;
   readonly source: string;
 }
+
+/**
+ * Normal insulation life of a well-dried, oxygen-free thermally upgraded paper system at the
+ * 110 °C reference hot-spot, by end-of-life criterion: the table IEEE C57.91 and IEC 60076-7 both
+ * give (confirmed from a stored transformer-life article quoting the IEC 60076-7 table; docs/references.md).
+ */
+export const NORMAL_INSULATION_LIFE: readonly { readonly criterion: string; readonly hours: number }[] = [
+  { criterion: '50 % retained tensile strength of insulation', hours: 65_000 },
+  { criterion: '25 % retained tensile strength of insulation', hours: 135_000 },
+  { criterion: '200 retained degree of polymerization in insulation', hours: 150_000 },
+  { criterion: 'interpretation of distribution transformer functional life test data', hours: 180_000 },
+];
+
+/**
+ * The normal life Fluxbook divides by: 180,000 h, the distribution-transformer criterion above, at
+ * the paper's own reference hot-spot (110 °C upgraded, 98 °C kraft). The guides print their life
+ * table for upgraded paper at 110 °C; for kraft paper the same hours are taken at 98 °C, where its
+ * aging rate is 1 (common practice; docs/references.md). A unit's own figure replaces it.
+ */
+export const NORMAL_LIFE_HOURS = 180_000;
 
 const IEC_TABLE_4 = 'IEC 60076-7 Table 4 (from memory)';
 
@@ -68,7 +100,7 @@ export const IEC_DISTRIBUTION_ONAN: ThermalCharacteristics = {
   method: 'IEC', cooling: 'ONAN', unit: 'distribution',
   oilExponent: 0.8, windingExponent: 1.6, lossRatio: 5, hotSpotFactor: 1.1,
   topOilRise: 55, hotSpotGradient: 23, oilTimeConstant: 180, windingTimeConstant: 4,
-  k11: 1.0, k21: 1.0, k22: 2.0, source: `${IEC_TABLE_4}, distribution transformers, ONAN`,
+  k11: 1.0, k21: 1.0, k22: 2.0, paper: 'normal', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEC_TABLE_4}, distribution transformers, ONAN`,
 };
 
 /** IEC 60076-7 Table 4, medium and large power transformers. */
@@ -77,25 +109,25 @@ export const IEC_POWER: Readonly<Record<Cooling, ThermalCharacteristics>> = {
     method: 'IEC', cooling: 'ONAN', unit: 'power',
     oilExponent: 0.8, windingExponent: 1.3, lossRatio: 6, hotSpotFactor: 1.3,
     topOilRise: 52, hotSpotGradient: 26, oilTimeConstant: 210, windingTimeConstant: 10,
-    k11: 0.5, k21: 2.0, k22: 2.0, source: `${IEC_TABLE_4}, medium and large power transformers, ONAN`,
+    k11: 0.5, k21: 2.0, k22: 2.0, paper: 'normal', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEC_TABLE_4}, medium and large power transformers, ONAN`,
   },
   ONAF: {
     method: 'IEC', cooling: 'ONAF', unit: 'power',
     oilExponent: 0.8, windingExponent: 1.3, lossRatio: 6, hotSpotFactor: 1.3,
     topOilRise: 52, hotSpotGradient: 26, oilTimeConstant: 150, windingTimeConstant: 7,
-    k11: 0.5, k21: 2.0, k22: 2.0, source: `${IEC_TABLE_4}, medium and large power transformers, ONAF`,
+    k11: 0.5, k21: 2.0, k22: 2.0, paper: 'normal', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEC_TABLE_4}, medium and large power transformers, ONAF`,
   },
   OF: {
     method: 'IEC', cooling: 'OF', unit: 'power',
     oilExponent: 1.0, windingExponent: 1.3, lossRatio: 6, hotSpotFactor: 1.3,
     topOilRise: 56, hotSpotGradient: 22, oilTimeConstant: 90, windingTimeConstant: 7,
-    k11: 1.0, k21: 1.3, k22: 1.0, source: `${IEC_TABLE_4}, medium and large power transformers, OF`,
+    k11: 1.0, k21: 1.3, k22: 1.0, paper: 'normal', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEC_TABLE_4}, medium and large power transformers, OF`,
   },
   OD: {
     method: 'IEC', cooling: 'OD', unit: 'power',
     oilExponent: 1.0, windingExponent: 2.0, lossRatio: 6, hotSpotFactor: 1.3,
     topOilRise: 49, hotSpotGradient: 29, oilTimeConstant: 90, windingTimeConstant: 7,
-    k11: 1.0, k21: 1.0, k22: 1.0, source: `${IEC_TABLE_4}, medium and large power transformers, OD`,
+    k11: 1.0, k21: 1.0, k22: 1.0, paper: 'normal', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEC_TABLE_4}, medium and large power transformers, OD`,
   },
 };
 
@@ -107,25 +139,25 @@ export const IEEE_ROWS: Readonly<Record<Cooling, ThermalCharacteristics>> = {
     method: 'IEEE', cooling: 'ONAN', unit: 'any',
     oilExponent: 0.8, windingExponent: 2 * 0.8, lossRatio: 5, hotSpotFactor: null,
     topOilRise: 55, hotSpotGradient: 25, oilTimeConstant: 180, windingTimeConstant: 4,
-    k11: 1, k21: 1, k22: 1, source: `${IEEE_EXPONENTS}; R, τo, τw from ${IEC_TABLE_4}, distribution ONAN`,
+    k11: 1, k21: 1, k22: 1, paper: 'upgraded', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEEE_EXPONENTS}; R, τo, τw from ${IEC_TABLE_4}, distribution ONAN`,
   },
   ONAF: {
     method: 'IEEE', cooling: 'ONAF', unit: 'any',
     oilExponent: 0.9, windingExponent: 2 * 0.8, lossRatio: 6, hotSpotFactor: null,
     topOilRise: 55, hotSpotGradient: 25, oilTimeConstant: 150, windingTimeConstant: 7,
-    k11: 1, k21: 1, k22: 1, source: `${IEEE_EXPONENTS}; R, τo, τw from ${IEC_TABLE_4}, ONAF`,
+    k11: 1, k21: 1, k22: 1, paper: 'upgraded', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEEE_EXPONENTS}; R, τo, τw from ${IEC_TABLE_4}, ONAF`,
   },
   OF: {
     method: 'IEEE', cooling: 'OF', unit: 'any',
     oilExponent: 0.9, windingExponent: 2 * 0.8, lossRatio: 6, hotSpotFactor: null,
     topOilRise: 55, hotSpotGradient: 25, oilTimeConstant: 90, windingTimeConstant: 7,
-    k11: 1, k21: 1, k22: 1, source: `${IEEE_EXPONENTS} (non-directed OFAF/OFWF); R, τo, τw from ${IEC_TABLE_4}, OF`,
+    k11: 1, k21: 1, k22: 1, paper: 'upgraded', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEEE_EXPONENTS} (non-directed OFAF/OFWF); R, τo, τw from ${IEC_TABLE_4}, OF`,
   },
   OD: {
     method: 'IEEE', cooling: 'OD', unit: 'any',
     oilExponent: 1.0, windingExponent: 2 * 1.0, lossRatio: 6, hotSpotFactor: null,
     topOilRise: 55, hotSpotGradient: 25, oilTimeConstant: 90, windingTimeConstant: 7,
-    k11: 1, k21: 1, k22: 1, source: `${IEEE_EXPONENTS} (directed ODAF/ODWF); R, τo, τw from ${IEC_TABLE_4}, OD`,
+    k11: 1, k21: 1, k22: 1, paper: 'upgraded', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEEE_EXPONENTS} (directed ODAF/ODWF); R, τo, τw from ${IEC_TABLE_4}, OD`,
   },
 };
 
@@ -143,17 +175,3 @@ export function thermalCharacteristics(method: ThermalMethod, cooling: Cooling):
   return IEC_POWER[cooling];
 }
 
-/**
- * Normal insulation life of a well-dried, oxygen-free thermally upgraded paper system at the
- * 110 °C reference hot-spot, by end-of-life criterion: the table IEEE C57.91 and IEC 60076-7 both
- * give (confirmed in a transformer-life article quoting the IEC 60076-7 table; docs/references.md).
- */
-export const NORMAL_INSULATION_LIFE: readonly { readonly criterion: string; readonly hours: number }[] = [
-  { criterion: '50 % retained tensile strength of insulation', hours: 65_000 },
-  { criterion: '25 % retained tensile strength of insulation', hours: 135_000 },
-  { criterion: '200 retained degree of polymerization in insulation', hours: 150_000 },
-  { criterion: 'interpretation of distribution transformer functional life test data', hours: 180_000 },
-];
-
-/** The normal life Fluxbook divides by: 180,000 h, the distribution-transformer criterion above. */
-export const NORMAL_LIFE_HOURS = 180_000;

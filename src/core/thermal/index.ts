@@ -1,81 +1,112 @@
 /**
- * Loading and aging of oil-immersed transformers (IEEE C57.91 clause 7; IEC 60076-7): hot-spot
- * temperature in steady state and over a profile, insulation aging, life consumed, and the
- * largest steady load for a hot-spot limit. Cooling, method and paper arrive as
- * their typed unions; the cell declarations parse the text a user types.
+ * Loading and aging of oil-immersed transformers (IEEE C57.91 clause 7; IEC 60076-7): temperatures
+ * in steady state, after a load step and over a profile, insulation aging and life consumed, the
+ * loading categories' limits, and the largest load for a limit. Every function takes the unit's
+ * thermal characteristics as one value (thermalModel: a table row with the unit's own data); the
+ * cell layer builds it from the cooling name or a heat-run block.
  */
-import { agingRateSum, type Paper } from './aging';
-import type { Cooling, ThermalCharacteristics, ThermalMethod } from './coolingTable';
-import { maxSteadyLoad, steadyHotSpot, thermalModel } from './steadyState';
-import { checkProfile, hotSpotSeriesInto } from './transient';
+import { lifeFraction, referenceHotSpot } from './aging';
+import { type Cooling, type Paper, type ThermalCharacteristics, type ThermalMethod } from './coolingTable';
+import { checkProfileLimits, cyclicCapability, guideOf, loadingLimits, type LoadingCategory, type ProfileCheck, type UnitSize } from './limits';
+import { thermalModel, type ThermalData } from './steadyState';
+import { checkProfile, runProfile } from './transient';
 
 export * from './aging';
+export * from './ambient';
 export * from './coolingTable';
+export * from './limits';
 export * from './steadyState';
+export * from './step';
 export * from './transient';
 
-/** Steady-state hot-spot temperature, °C. */
-export function hotSpotSteady(
-  load: number,
-  ambientC: number,
-  cooling: Cooling,
-  topOilRise: number | undefined,
-  hotSpotGradient: number | undefined,
-  lossRatio: number | undefined,
-  method: ThermalMethod,
-): number {
-  return steadyHotSpot(thermalModel(cooling, method, topOilRise, hotSpotGradient, lossRatio), load, ambientC);
-}
-
-/** Largest steady per-unit load whose hot-spot reaches limit_c. */
-export function maxLoadForHotSpot(
-  ambientC: number,
-  limitC: number,
-  cooling: Cooling,
-  topOilRise: number | undefined,
-  hotSpotGradient: number | undefined,
-  lossRatio: number | undefined,
-  method: ThermalMethod,
-): number {
-  return maxSteadyLoad(thermalModel(cooling, method, topOilRise, hotSpotGradient, lossRatio), ambientC, limitC);
-}
-
 /** Checked profile → end-of-step hot-spot series, °C. */
-function profileHotSpots(m: ThermalCharacteristics, loads: Float64Array, ambients: Float64Array, stepHours: number): Float64Array {
+export function hotSpotProfile(m: ThermalCharacteristics, loads: Float64Array, ambients: Float64Array, stepHours: number): Float64Array {
   checkProfile(loads, ambients, stepHours);
-  return hotSpotSeriesInto(m, loads, ambients, stepHours, new Float64Array(loads.length));
+  const out = new Float64Array(loads.length);
+  runProfile(m, loads, ambients, stepHours, { hotSpots: out });
+  return out;
 }
 
-/** The transient hot-spot series, one value per step, °C. */
-export function hotSpotProfile(
-  loads: Float64Array,
-  ambients: Float64Array,
-  stepHours: number,
-  cooling: Cooling,
-  topOilRise: number | undefined,
-  hotSpotGradient: number | undefined,
-  lossRatio: number | undefined,
-  method: ThermalMethod,
-): Float64Array {
-  return profileHotSpots(thermalModel(cooling, method, topOilRise, hotSpotGradient, lossRatio), loads, ambients, stepHours);
+/** Checked profile → end-of-step top-oil series, °C. */
+export function topOilProfile(m: ThermalCharacteristics, loads: Float64Array, ambients: Float64Array, stepHours: number): Float64Array {
+  checkProfile(loads, ambients, stepHours);
+  const out = new Float64Array(loads.length);
+  runProfile(m, loads, ambients, stepHours, { topOils: out });
+  return out;
 }
 
-/** The arguments of equivalentAging and lifeUsedHours: those of hotSpotProfile, then the paper kind. */
-type AgingArgs = [...Parameters<typeof hotSpotProfile>, paper: Paper];
-
-/** Σ V over the profile's end-of-step hot-spots, for the paper named last. */
-function agingSum(args: AgingArgs): number {
-  const [loads, ambients, stepHours, cooling, topOilRise, hotSpotGradient, lossRatio, method, paper] = args;
-  const hotSpots = hotSpotProfile(loads, ambients, stepHours, cooling, topOilRise, hotSpotGradient, lossRatio, method);
-  return agingRateSum(hotSpots, paper);
+/** Life consumed over a checked profile, hours at the paper's reference hot-spot (aging integrated within each step). */
+export function lifeUsedHours(m: ThermalCharacteristics, loads: Float64Array, ambients: Float64Array, stepHours: number, paper: Paper = m.paper): number {
+  checkProfile(loads, ambients, stepHours);
+  return runProfile(m, loads, ambients, stepHours, { paper }).agingHours;
 }
 
-/** Equivalent aging factor over the profile, Σ V·Δt / Σ Δt (equal steps: the mean rate). */
-export function equivalentAging(...args: AgingArgs): number {
-  return agingSum(args) / args[0].length;
+/** F_EQA over a checked profile: Σ ∫V dt / Σ Δt. */
+export function equivalentAging(m: ThermalCharacteristics, loads: Float64Array, ambients: Float64Array, stepHours: number, paper: Paper = m.paper): number {
+  return lifeUsedHours(m, loads, ambients, stepHours, paper) / (loads.length * stepHours);
 }
 
-/** Insulation life consumed over the profile, Σ V·Δt, hours at the reference hot-spot. */
-export function lifeUsedHours(...args: AgingArgs): number {
-  return agingSum(args) * args[2];
+/** LOADCHECK / LOADOK: a checked profile against a category's limits for the model's guide. */
+export function profileCheck(m: ThermalCharacteristics, loads: Float64Array, ambients: Float64Array, stepHours: number, category: LoadingCategory, size: UnitSize): ProfileCheck {
+  const limits = loadingLimits(guideOf(m), category, size);
+  checkProfile(loads, ambients, stepHours);
+  return checkProfileLimits(m, loads, ambients, stepHours, limits);
 }
+
+/** CYCLICMAX: the largest factor on the whole checked profile that keeps it within the category. */
+export function cyclicMax(m: ThermalCharacteristics, loads: Float64Array, ambients: Float64Array, stepHours: number, category: LoadingCategory, size: UnitSize) {
+  const limits = loadingLimits(guideOf(m), category, size);
+  checkProfile(loads, ambients, stepHours);
+  return cyclicCapability(m, loads, ambients, stepHours, limits);
+}
+
+export interface LoadingYearOptions {
+  /** Step length, h (default 1). */
+  readonly stepHours?: number;
+  readonly cooling?: Cooling;
+  readonly method?: ThermalMethod;
+  /** The unit's own thermal data (heat-run report, loss ratio, paper...); absent: the table's. */
+  readonly data?: ThermalData;
+}
+
+export interface LoadingYear {
+  /** End-of-step hot-spot temperature, °C, one per step. */
+  readonly hotSpots: Float64Array;
+  /** End-of-step top-oil temperature, °C, one per step. */
+  readonly topOils: Float64Array;
+  readonly peakHotSpot: number;
+  /** F_EQA over the profile. */
+  readonly equivalentAging: number;
+  /** Life consumed, hours at the reference hot-spot. */
+  readonly lifeUsedHours: number;
+  /** lifeUsedHours over the paper's normal life. */
+  readonly lifeFraction: number;
+  readonly normalLifeHours: number;
+  readonly paper: Paper;
+  readonly referenceHotSpot: number;
+  /** The thermal characteristics used, with their source. */
+  readonly model: ThermalCharacteristics;
+}
+
+/** One unit over a profile (a year of 8,760 hourly loads, or any count): everything at once. */
+export function loadingYear(loads: Float64Array, ambients: Float64Array, options: LoadingYearOptions = {}): LoadingYear {
+  const stepHours = options.stepHours ?? 1;
+  const model = thermalModel(options.method ?? 'IEEE', options.cooling ?? 'ONAN', options.data);
+  checkProfile(loads, ambients, stepHours);
+  const hotSpots = new Float64Array(loads.length);
+  const topOils = new Float64Array(loads.length);
+  const run = runProfile(model, loads, ambients, stepHours, { paper: model.paper, hotSpots, topOils });
+  return {
+    hotSpots,
+    topOils,
+    peakHotSpot: run.peakHotSpot,
+    equivalentAging: run.agingHours / (stepHours * loads.length),
+    lifeUsedHours: run.agingHours,
+    lifeFraction: lifeFraction(run.agingHours, model.normalLifeHours),
+    normalLifeHours: model.normalLifeHours,
+    paper: model.paper,
+    referenceHotSpot: referenceHotSpot(model.paper),
+    model,
+  };
+}
+

@@ -1,16 +1,11 @@
 /**
- * Efficiency regulations: the US DOE minimum efficiencies of distribution transformers
- * (10 CFR 431.196) and the EU Ecodesign Tier 2 maximum losses of three-phase liquid-immersed
- * medium power transformers (Regulation (EU) No 548/2014, Annex I, Table I.1, as amended by
- * Regulation (EU) 2019/1783). Tables are typed once from the regulation text, each with the
- * paragraph it comes from; the reference tests re-read every row against the printed tables.
+ * US DOE minimum efficiencies of distribution transformers (10 CFR 431.196), the regulation's
+ * scope (10 CFR 431.192) and the minimum for a rating. Every table is typed once from the
+ * regulation text with the paragraph it comes from.
  */
-import { InputError, NotInTableError, shown } from './errors';
-import { nonNegative, phaseCount, positive } from './guards';
-
-// ---------------------------------------------------------------------------------------------
-// US DOE, 10 CFR 431.196
-// ---------------------------------------------------------------------------------------------
+import { InputError, NotInTableError, shown } from '../errors';
+import { phaseCount, positive } from '../guards';
+import { interpolate } from './interpolation';
 
 export type DoeKind = 'liquid' | 'submersible' | 'lvdry' | 'mvdry';
 export type DoeLevels = 2016 | 2029;
@@ -167,28 +162,6 @@ export function findDoeTable(kind: DoeKind, phases: 1 | 3, levels: DoeLevels, bi
   return t;
 }
 
-/**
- * Linear interpolation in a table of ascending kVA rows, as 10 CFR 431.196 directs for ratings
- * between rows ("linear interpolation of the kVA and efficiency values immediately above and
- * below that kVA rating"). A rating outside the first and last row has no value: NotInTableError.
- */
-function interpolate(rows: readonly { readonly kva: number; readonly value: number }[], kva: number, what: string): number {
-  const first = rows[0]!;
-  const last = rows[rows.length - 1]!;
-  if (kva < first.kva || kva > last.kva) {
-    throw new NotInTableError('kva', `${shown(kva)} kVA is outside ${what}, which runs from ${shown(first.kva)} to ${shown(last.kva)} kVA`);
-  }
-  for (let i = 0; i < rows.length; i++) {
-    const hi = rows[i]!;
-    if (kva === hi.kva) return hi.value;
-    if (kva < hi.kva) {
-      const lo = rows[i - 1]!;
-      return lo.value + ((hi.value - lo.value) * (kva - lo.kva)) / (hi.kva - lo.kva);
-    }
-  }
-  return last.value;
-}
-
 function describeDoe(t: DoeTable): string {
   return `the ${t.kind} ${t.phases}-phase table of 10 CFR ${t.paragraph}${t.bil ? ` (BIL ${t.bil})` : ''}`;
 }
@@ -200,125 +173,54 @@ export function doeTableFor(kind: DoeKind, phases: number, levels: number, bilKv
   return findDoeTable(kind, p, l, kind === 'mvdry' ? bilBand(bilKv) : undefined);
 }
 
+/**
+ * The voltages of a distribution transformer as 10 CFR 431.192 defines it: input 34.5 kV or
+ * less, output 600 V or less; a low-voltage dry-type unit has an input of 600 V or less
+ * (docs/references.md, Regulations). A unit
+ * outside them is not covered by any table: NotInTableError. A blank voltage is not checked.
+ */
+export const DOE_MAX_INPUT_V = 34500;
+export const DOE_MAX_OUTPUT_V = 600;
+const DOE_LV_DRY_MAX_INPUT_V = 600;
+
+export function checkDoeScope(kind: DoeKind, hvVolts: number | undefined, lvVolts: number | undefined): void {
+  if (hvVolts !== undefined) {
+    const hv = positive('hv_v', hvVolts);
+    if (hv > DOE_MAX_INPUT_V) {
+      throw new NotInTableError('hv_v', `${shown(hv)} V is above 34,500 V: 10 CFR 431.192 covers distribution transformers with an input of 34.5 kV or less, so no DOE level applies`);
+    }
+    if (kind === 'lvdry' && hv > DOE_LV_DRY_MAX_INPUT_V) {
+      throw new InputError('kind', `"lvdry" is a dry-type unit with an input of 600 V or less, but hv_v is ${shown(hv)} V; use "mvdry"`);
+    }
+    if (kind === 'mvdry' && hv <= DOE_LV_DRY_MAX_INPUT_V) {
+      throw new InputError('kind', `"mvdry" is a dry-type unit with an input above 600 V, but hv_v is ${shown(hv)} V; use "lvdry"`);
+    }
+  }
+  if (lvVolts !== undefined) {
+    const lv = positive('lv_v', lvVolts);
+    if (lv > DOE_MAX_OUTPUT_V) {
+      throw new NotInTableError('lv_v', `${shown(lv)} V is above 600 V: 10 CFR 431.192 covers distribution transformers with an output of 600 V or less, so no DOE level applies`);
+    }
+  }
+}
+
 /** Minimum efficiency (fraction) at the regulation's test load and power factor 1. */
-export function doeMinimumEfficiency(kva: number, kind: DoeKind, phases: number, levels: number, bilKv: number | undefined): number {
-  const s = positive('kva', kva);
-  const t = doeTableFor(kind, phases, levels, bilKv);
-  const rows = t.rows.map((r) => ({ kva: r.kva, value: r.percent }));
-  return interpolate(rows, s, describeDoe(t)) / 100;
-}
-
-// ---------------------------------------------------------------------------------------------
-// EU Ecodesign, Regulation (EU) No 548/2014 Annex I Table I.1, Tier 2 (from 1 July 2021)
-// ---------------------------------------------------------------------------------------------
-
-export interface EuTier2Row {
-  /** Rated power; the first row stands for "≤ 25 kVA". */
-  readonly kva: number;
-  /** Maximum load loss Pk, W (the Ak level). */
-  readonly pkW: number;
-  /** Maximum no-load loss P0, W (the A0 − 10 % level). */
-  readonly p0W: number;
-  /** Where the row's values come from. */
-  readonly source: string;
-}
-
-/**
- * FROM MEMORY (docs/references.md, Regulations). Values are the Tier 2 levels as recalled — Ak for
- * the load loss and A0 − 10 % for the no-load loss of three-phase liquid-immersed medium power
- * transformers with one winding Um ≤ 24 kV and the other Um ≤ 1.1 kV — to be confirmed against
- * the Official Journal text before they are relied on. The 2019/1783 amendment left the ≤ 24 kV
- * values unchanged; a medium power transformer starts at 5 kVA (548/2014 Article 2(3)).
- */
-const EU_FROM_MEMORY = 'EU 548/2014 Annex I Table I.1, Tier 2 (from memory)';
-export const EU_TIER2_LIQUID: readonly EuTier2Row[] = Object.freeze(
-  (
-    [
-      [25, 600, 63],
-      [50, 750, 81],
-      [100, 1250, 130],
-      [160, 1750, 189],
-      [250, 2350, 270],
-      [315, 2800, 324],
-      [400, 3250, 387],
-      [500, 3900, 459],
-      [630, 4600, 540],
-      [800, 6000, 585],
-      [1000, 7600, 693],
-      [1250, 9500, 855],
-      [1600, 12000, 1080],
-      [2000, 15000, 1305],
-      [2500, 18500, 1575],
-      [3150, 23000, 1980],
-    ] as const
-  ).map(([kva, pkW, p0W]) => Object.freeze({ kva, pkW, p0W, source: EU_FROM_MEMORY })),
-);
-
-/** Medium power transformers start at 5 kVA (548/2014 Article 2(3)). */
-const EU_MEDIUM_POWER_MIN_KVA = 5;
-
-export type EuLoss = 'pk' | 'p0';
-
-/**
- * Maximum Tier 2 loss in W for a rating. The "≤ 25" row holds from 5 to 25 kVA; between rows the
- * limit is interpolated linearly, as Annex I directs for intermediate ratings (from memory).
- * Above 3150 kVA the regulation sets a minimum peak efficiency index instead: no row.
- */
-export function euMaximumLoss(kva: number, which: EuLoss): number {
-  const s = positive('kva', kva);
-  if (s < EU_MEDIUM_POWER_MIN_KVA) {
-    throw new NotInTableError('kva', `${shown(s)} kVA is below 5 kVA, the smallest medium power transformer of EU 548/2014`);
-  }
-  const rows = EU_TIER2_LIQUID.map((r) => ({ kva: r.kva, value: which === 'pk' ? r.pkW : r.p0W }));
-  if (s <= rows[0]!.kva) return rows[0]!.value;
-  if (s > rows[rows.length - 1]!.kva) {
-    throw new NotInTableError('kva', `${shown(s)} kVA is above 3150 kVA; EU 548/2014 sets a minimum peak efficiency index there, not maximum losses`);
-  }
-  return interpolate(rows, s, 'EU 548/2014 Table I.1');
-}
-
-// ---------------------------------------------------------------------------------------------
-// Compliance of a unit's test-report losses
-// ---------------------------------------------------------------------------------------------
-
-export type Rule = 'DOE' | 'EU' | 'both';
-
-/** Efficiency at a per-unit load and power factor 1 from the losses: x·S / (x·S + P0 + x²·Pk). */
-function efficiencyAtTestLoad(kva: number, p0: number, pk: number, x: number): number {
-  const out = x * kva * 1000;
-  return out / (out + p0 + x * x * pk);
-}
-
-/**
- * TRUE when the losses meet the rule. DOE: the efficiency at the table's test load (50 %, or 35 %
- * for low-voltage dry-type), power factor 1, is at least the minimum, compared unrounded. EU: both
- * P0 and Pk are at most the Tier 2 maxima (three-phase liquid-immersed only). "both": the two.
- * The losses must be at the reference temperature each rule's test method uses.
- */
-export function meetsEfficiencyRule(
+export function doeMinimumEfficiency(
   kva: number,
-  p0Watts: number,
-  pkWatts: number,
-  rule: Rule,
   kind: DoeKind,
   phases: number,
   levels: number,
   bilKv: number | undefined,
-): boolean {
+  hvVolts?: number,
+  lvVolts?: number,
+): number {
   const s = positive('kva', kva);
-  const p0 = nonNegative('p0_w', p0Watts);
-  const pk = nonNegative('pk_w', pkWatts);
-  let ok = true;
-  if (rule !== 'EU') {
-    const t = doeTableFor(kind, phases, levels, bilKv);
-    const minimum = doeMinimumEfficiency(s, kind, phases, levels, bilKv);
-    ok = ok && efficiencyAtTestLoad(s, p0, pk, t.testLoad) >= minimum;
-  }
-  if (rule !== 'DOE') {
-    if (kind !== 'liquid' || phaseCount('phases', phases) !== 3) {
-      throw new NotInTableError('kind', 'the EU Tier 2 table in Fluxbook covers three-phase liquid-immersed units only');
-    }
-    ok = ok && p0 <= euMaximumLoss(s, 'p0') && pk <= euMaximumLoss(s, 'pk');
-  }
-  return ok;
+  checkDoeScope(kind, hvVolts, lvVolts);
+  return doeMinimumOf(doeTableFor(kind, phases, levels, bilKv), s);
+}
+
+/** The minimum of a table already found, so a caller that needs the table too looks it up once. */
+export function doeMinimumOf(t: DoeTable, kva: number): number {
+  const rows = t.rows.map((r) => ({ kva: r.kva, value: r.percent }));
+  return interpolate(rows, kva, describeDoe(t)) / 100;
 }
