@@ -27,6 +27,14 @@ export function temperatureConstant(material: ConductorMaterial, standard: LossS
   return standard === 'IEC' ? 235 : 234.5;
 }
 
+/** R(to_c) / R(from_c) = (Tk + to_c)/(Tk + from_c), each temperature checked against its argument. */
+function resistanceRatio(fromC: number, toC: number, material: ConductorMaterial, standard: LossStandard): number {
+  const tk = temperatureConstant(material, standard);
+  const from = celsiusAboveAbsoluteOfResistance('from_c', fromC, tk);
+  const to = celsiusAboveAbsoluteOfResistance('to_c', toC, tk);
+  return (tk + to) / (tk + from);
+}
+
 /**
  * Load loss measured at `fromC` moved to `toC` (IEEE C57.12.90 load-loss clause; IEC 60076-1
  * clause 11.4, both from memory): the I²R part grows with resistance, f = (Tk + to)/(Tk + from);
@@ -47,15 +55,12 @@ export function loadLossAtTemperature(
   standard: LossStandard,
 ): number {
   const pk = nonNegative('pk_w', pkWatts);
-  const tk = temperatureConstant(material, standard);
-  const from = celsiusAboveAbsoluteOfResistance('from_c', fromC, tk);
-  const to = celsiusAboveAbsoluteOfResistance('to_c', toC, tk);
-  const factor = (tk + to) / (tk + from);
+  const factor = resistanceRatio(fromC, toC, material, standard);
   if (i2rWatts === undefined) {
     if (factor < 1) {
       throw new InputError(
         'i2r_w',
-        `is blank; correcting from ${shown(from)} °C down to ${shown(to)} °C needs the I²R part of pk_w (measured resistance × current²): taking all of pk_w as I²R would understate the loss`,
+        `is blank; correcting from ${shown(fromC)} °C down to ${shown(toC)} °C needs the I²R part of pk_w (measured resistance × current²): taking all of pk_w as I²R would understate the loss`,
       );
     }
     return pk * factor;
@@ -71,10 +76,7 @@ export function loadLossAtTemperature(
  */
 export function resistanceAtTemperature(ohms: number, fromC: number, toC: number, material: ConductorMaterial, standard: LossStandard): number {
   const r = positive('r_ohm', ohms);
-  const tk = temperatureConstant(material, standard);
-  const from = celsiusAboveAbsoluteOfResistance('from_c', fromC, tk);
-  const to = celsiusAboveAbsoluteOfResistance('to_c', toC, tk);
-  return (r * (tk + to)) / (tk + from);
+  return r * resistanceRatio(fromC, toC, material, standard);
 }
 
 /**
