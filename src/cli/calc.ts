@@ -42,8 +42,9 @@ type Reply =
 /** The engine call and what the command needs of its answer. */
 async function work(job: Job, onProgress: (stage: Stage, done: number, total: number) => void): Promise<{ bytes: Uint8Array; summary: CalcSummary }> {
   const r = await calculateWorkbook(Buffer.from(job.bytes.buffer, job.bytes.byteOffset, job.bytes.length), { values: job.values, onProgress });
-  const { bytes, results, ...rest } = r;
-  return { bytes, summary: { ...rest, ...(job.json ? { json: JSON.stringify(results, null, 1) } : {}) } };
+  // `results` is built when read: only for --json.
+  const summary: CalcSummary = { formulas: r.formulas, ours: r.ours, errors: r.errors, oursErrors: r.oursErrors, errorCodes: r.errorCodes, changedParts: r.changedParts };
+  return { bytes: r.bytes, summary: job.json ? { ...summary, json: JSON.stringify(r.results, null, 1) } : summary };
 }
 
 /** The script a worker starts from: this very program (the built bundle, or the sources under tsx). */

@@ -72,6 +72,9 @@ interface Group {
   readonly places: number[];
 }
 
+/** Cells of a column computed in one call of the adapter. */
+const SLICE = 4096;
+
 /**
  * Computes every qualifying column; the values are given by the formula's place among all the
  * workbook's formulas (sheet by sheet, in file order), undefined for the others. `tick` hears how
@@ -81,7 +84,7 @@ export function computeColumns(read: PackageRead, tick: (n: number) => void): (C
   const out: (ColumnValue | undefined)[] = [];
   let offset = 0;
   for (const sheet of read.sheets) {
-    const groups = new Map<string, Group>();
+    const groups = new Map<string, Map<number, Group>>();
     const base = offset;
     offset += sheet.formulas.length;
     out.length = offset;
@@ -93,19 +96,25 @@ export function computeColumns(read: PackageRead, tick: (n: number) => void): (C
       if (!decl || decl.kind !== 'each' || decl.args.some((a) => a.series) || !argumentCountFits(decl, call.args.length)) continue;
       const row = sheet.rows[f.row - 1];
       if (call.args.some((a) => 'col' in a && plainInput(row?.[a.col - 1]) === undefined)) continue;
-      const key = `${f.col}|${call.key}`;
-      let g = groups.get(key);
-      if (!g) groups.set(key, (g = { decl, args: call.args, cells: [], places: [] }));
+      // By call, then column: the call's key is one string for a whole template, its hash kept.
+      let byCol = groups.get(call.key);
+      if (!byCol) groups.set(call.key, (byCol = new Map()));
+      let g = byCol.get(f.col);
+      if (!g) byCol.set(f.col, (g = { decl, args: call.args, cells: [], places: [] }));
       g.cells.push(f);
       g.places.push(base + k);
     }
-    for (const g of groups.values()) {
+    for (const g of [...groups.values()].flatMap((byCol) => [...byCol.values()])) {
       const fn = cellFunction(g.decl);
-      const args = g.args.map((a) => ('col' in a ? g.cells.map((f) => [plainInput(sheet.rows[f.row - 1]![a.col - 1])]) : a.value));
-      const result = fn(...args);
-      const whole = result.length === 1 && result[0]!.length === 1 && g.cells.length > 1;
-      g.places.forEach((place, i) => (out[place] = output(whole ? result[0]![0] : result[i]?.[0])));
-      tick(g.cells.length);
+      // A slice of the column at a time: the argument columns and the adapter's result are short-lived.
+      for (let from = 0; from < g.cells.length; from += SLICE) {
+        const cells = g.cells.slice(from, from + SLICE);
+        const args = g.args.map((a) => ('col' in a ? cells.map((f) => [plainInput(sheet.rows[f.row - 1]![a.col - 1])]) : a.value));
+        const result = fn(...args);
+        const whole = result.length === 1 && result[0]!.length === 1 && cells.length > 1;
+        for (let i = 0; i < cells.length; i++) out[g.places[from + i]!] = output(whole ? result[0]![0] : result[i]?.[0]);
+        tick(cells.length);
+      }
     }
   }
   return out;

@@ -142,26 +142,72 @@ class CellIndex {
   }
 }
 
-interface SheetPlan {
-  /** The new XML of formula cells, by position. */
-  readonly formulaEdits: Edit[];
-  /** The new XML of other cells (spilled values, cleared old results), by row and column. */
-  readonly cells: Map<number, Map<number, string>>;
+/** The new XML of a formula cell, from its old `<c>` element and the `<f>` inside it. */
+function formulaCellXml(res: CellResult, old: string, fOld: string, options: { values: boolean; cm: number | undefined }): string {
+  const f = res.cell;
+  const tagEnd = old.indexOf('>') + 1;
+  const oldStart = old.slice(0, tagEnd);
+  const cp = old.charCodeAt(1) === 99 && (old.charCodeAt(2) === 32 || old.charCodeAt(2) === 62) ? '' : prefixOf(old); // "<c " or "<c>"
+  const spill = res.spill && f.kind !== 'shared' ? res.spill : undefined;
+  let value = res.value;
+  if (value === null) value = 0; // a formula that reads a blank shows 0, as in Excel
+  const { t, inner } = valueParts(value, cp, options.values);
+  const set: Record<string, string | null> = { t: t ?? null };
+  let formula = '';
+  let plainTag = !/\st\s*=|\scm\s*=/.test(oldStart); // no type or metadata to change: the start tag stays
+  if (options.values) {
+    set.cm = null;
+  } else if (!spill && f.kind !== 'array' && (f.template.stored === (f.template.source ?? f.stored) || fOld.endsWith('/>'))) {
+    formula = fOld;
+  } else {
+    const stored = f.written;
+    const fAttrs = attributes(fOld.slice(0, fOld.indexOf('>') + 1));
+    if (spill) {
+      const ref = `${a1(f.row, f.col)}:${a1(f.row + spill.length - 1, f.col + (spill[0]?.length ?? 1) - 1)}`;
+      formula = `${withAttributes(`${cp}f`, fAttrs, { t: 'array', ref })}>${esc(stored)}</${cp}f>`;
+      if (options.cm !== undefined) {
+        set.cm = String(options.cm);
+        plainTag = false;
+      }
+    } else if (f.kind === 'array') {
+      formula = `${withAttributes(`${cp}f`, fAttrs, { ref: a1(f.row, f.col) })}>${esc(stored)}</${cp}f>`;
+    } else {
+      formula = `${withAttributes(`${cp}f`, fAttrs, {})}>${esc(stored)}</${cp}f>`;
+    }
+  }
+  let start: string;
+  if (plainTag && !options.values) start = t === undefined ? oldStart.slice(0, -1) : `${oldStart.slice(0, -1)} t="${t}"`;
+  else start = withAttributes(`${cp}c`, attributes(oldStart), set);
+  return `${start}>${formula}${inner}</${cp}c>`;
 }
 
-function planSheet(
-  sheet: SheetRead,
-  cells: CellResult[],
-  options: { values: boolean; cm: number | undefined },
-): SheetPlan {
+/** Is `at` the start of one of the formula cells (their starts ascending)? */
+function isFormulaStart(starts: Int32Array, at: number): boolean {
+  let lo = 0;
+  let hi = starts.length - 1;
+  while (lo <= hi) {
+    const mid = (lo + hi) >> 1;
+    if (starts[mid] === at) return true;
+    if (starts[mid]! < at) lo = mid + 1;
+    else hi = mid - 1;
+  }
+  return false;
+}
+
+/**
+ * The edits of a sheet other than its formula cells — cells of spilled results, cleared cells of
+ * old array results, rows that must be added — in the order they apply: by position, and at one
+ * position insertions before the element that starts there. A formula cell is never overwritten
+ * by them: formula cells are written from their own results.
+ */
+function otherEdits(sheet: SheetRead, cells: readonly CellResult[], formulaStarts: Int32Array, options: { values: boolean }): Edit[] {
   const text = sheet.text;
   const p = sheet.sheetData.start >= 0 ? prefixOf(text.slice(sheet.sheetData.start, sheet.sheetData.start + 40)) : '';
-  const formulaEdits: Edit[] = [];
-  const other = new Map<number, Map<number, string>>();
+  const planned = new Map<number, Map<number, string>>();
   const index = new CellIndex(sheet);
   const setCell = (row: number, col: number, xml: string) => {
-    let m = other.get(row);
-    if (!m) other.set(row, (m = new Map()));
+    let m = planned.get(row);
+    if (!m) planned.set(row, (m = new Map()));
     m.set(col, xml);
   };
   /** The start tag of an existing cell, for its style. */
@@ -190,87 +236,37 @@ function planSheet(
   }
   for (const res of cells) {
     const f = res.cell;
-    const old = text.slice(f.start, f.end);
-    const tagEnd = old.indexOf('>') + 1;
-    const oldStart = old.slice(0, tagEnd);
-    const cp = old.charCodeAt(1) === 99 && (old.charCodeAt(2) === 32 || old.charCodeAt(2) === 62) ? '' : prefixOf(old); // "<c " or "<c>"
     const spill = res.spill && f.kind !== 'shared' ? res.spill : undefined;
-    const rows = spill?.length ?? 1;
-    const cols = spill?.[0]?.length ?? 1;
-    let value = res.value;
-    if (value === null) value = 0; // a formula that reads a blank shows 0, as in Excel
-    const { t, inner } = valueParts(value, cp, options.values);
-    const set: Record<string, string | null> = { t: t ?? null };
-    let formula = '';
-    let plainTag = !/\st\s*=|\scm\s*=/.test(oldStart); // no type or metadata to change: the start tag stays
-    if (options.values) {
-      set.cm = null;
-    } else {
-      const fOld = text.slice(f.fStart, f.fEnd);
-      const stored = f.written;
-      if (!spill && f.kind !== 'array' && (f.template.stored === (f.template.source ?? f.stored) || fOld.endsWith('/>'))) {
-        formula = fOld;
-      } else {
-        const fTag = fOld.slice(0, fOld.indexOf('>') + 1);
-        const fAttrs = attributes(fTag);
-        if (spill) {
-          const ref = `${a1(f.row, f.col)}:${a1(f.row + rows - 1, f.col + cols - 1)}`;
-          formula = `${withAttributes(`${cp}f`, fAttrs, { t: 'array', ref })}>${esc(stored)}</${cp}f>`;
-          if (options.cm !== undefined) {
-            set.cm = String(options.cm);
-            plainTag = false;
-          }
-        } else if (f.kind === 'array') {
-          formula = `${withAttributes(`${cp}f`, fAttrs, { ref: a1(f.row, f.col) })}>${esc(stored)}</${cp}f>`;
-        } else {
-          formula = `${withAttributes(`${cp}f`, fAttrs, {})}>${esc(stored)}</${cp}f>`;
-        }
-      }
-    }
-    let start: string;
-    if (plainTag && !options.values) start = t === undefined ? oldStart.slice(0, -1) : `${oldStart.slice(0, -1)} t="${t}"`;
-    else start = withAttributes(`${cp}c`, attributes(oldStart), set);
-    const cellXml = `${start}>${formula}${inner}</${cp}c>`;
-    if (cellXml !== old) formulaEdits.push({ at: f.start, end: f.end, text: cellXml, seq: 0 });
-    if (spill) {
-      for (let i = 0; i < rows; i++) {
-        for (let j = 0; j < cols; j++) if (i > 0 || j > 0) setCell(f.row + i, f.col + j, valueCell(f.row + i, f.col + j, spill[i]![j]!));
-      }
+    if (!spill) continue;
+    for (let i = 0; i < spill.length; i++) {
+      for (let j = 0; j < spill[i]!.length; j++) if (i > 0 || j > 0) setCell(f.row + i, f.col + j, valueCell(f.row + i, f.col + j, spill[i]![j]!));
     }
   }
-  return { formulaEdits, cells: other };
-}
 
-/** The sheet's text with the plan applied, as pieces in order; undefined when nothing changes. */
-function applyPlan(sheet: SheetRead, plan: SheetPlan): string[] | undefined {
-  const text = sheet.text;
-  const edits: Edit[] = [...plan.formulaEdits];
-  const index = new CellIndex(sheet);
-  const p = sheet.sheetData.start >= 0 ? prefixOf(text.slice(sheet.sheetData.start, sheet.sheetData.start + 40)) : '';
+  const edits: Edit[] = [];
   const newRows: [number, string][] = [];
   let seq = 1;
-  const formulaStarts = new Set(plan.formulaEdits.map((e) => e.at));
-  for (const row of [...plan.cells.keys()].sort((a, b) => a - b)) {
-    const cells = [...plan.cells.get(row)!.entries()].sort((a, b) => a[0] - b[0]);
+  for (const row of [...planned.keys()].sort((a, b) => a - b)) {
+    const rowCells = [...planned.get(row)!.entries()].sort((a, b) => a[0] - b[0]);
     const tag = index.rowTag(row);
     if (tag === undefined) {
-      newRows.push([row, `<${p}row r="${row}">${cells.map(([, x]) => x).join('')}</${p}row>`]);
+      newRows.push([row, `<${p}row r="${row}">${rowCells.map(([, x]) => x).join('')}</${p}row>`]);
       continue;
     }
-    const selfClosing = sheet.rowTags.cols[3]![tag]! < 0;
-    if (selfClosing) {
+    if (sheet.rowTags.cols[3]![tag]! < 0) {
+      // <row/>: written again with its cells.
       const start = sheet.rowTags.cols[1]![tag]!;
       const end = sheet.rowTags.cols[4]![tag]!;
       const open = text.slice(start, end).replace(/\s*\/>$/, '>');
-      edits.push({ at: start, end, text: `${open}${cells.map(([, x]) => x).join('')}</${p}row>`, seq: seq++ });
+      edits.push({ at: start, end, text: `${open}${rowCells.map(([, x]) => x).join('')}</${p}row>`, seq: seq++ });
       continue;
     }
-    for (const [col, xml] of cells) {
+    for (const [col, xml] of rowCells) {
       const i = index.find(row, col);
       if (i !== undefined) {
         const start = sheet.cells.cols[2]![i]!;
         const end = sheet.cells.cols[3]![i]!;
-        if (text.slice(start, end) !== xml && !formulaStarts.has(start)) edits.push({ at: start, end, text: xml, seq: seq++ });
+        if (text.slice(start, end) !== xml && !isFormulaStart(formulaStarts, start)) edits.push({ at: start, end, text: xml, seq: seq++ });
       } else {
         const at = index.insertAt(row, col)!;
         edits.push({ at, end: at, text: xml, seq: seq++ });
@@ -287,21 +283,62 @@ function applyPlan(sheet: SheetRead, plan: SheetPlan): string[] | undefined {
     const open = text.slice(sd.start, sd.end).replace(/\s*\/>$/, '>');
     edits.push({ at: sd.start, end: sd.end, text: `${open}${newRows.map(([, x]) => x).join('')}</${p}sheetData>`, seq: seq++ });
   }
-  // At one position, insertions go before the element that starts there (which may be replaced).
-  if (edits.length === 0) return undefined;
-  edits.sort((a, b) => a.at - b.at || Number(a.end > a.at) - Number(b.end > b.at) || a.seq - b.seq);
-  const out: string[] = [];
-  let pos = 0;
-  for (const e of edits) {
-    if (e.at < pos) continue; // inside an element already replaced
-    out.push(text.slice(pos, e.at), e.text);
-    pos = e.end;
-  }
-  out.push(text.slice(pos));
-  return out;
+  return edits.sort((a, b) => a.at - b.at || Number(a.end > a.at) - Number(b.end > b.at) || a.seq - b.seq);
 }
 
-/** Removes the cell formulas of a sheet's non-formula text in values mode: nothing else to do. */
+/**
+ * The sheet's new text, piece by piece: the stretches between edits as they were, each formula
+ * cell's new element made when its turn comes (a fleet has hundreds of thousands, none kept), and
+ * the other edits merged in by position. `state.changed` tells afterwards whether anything differed.
+ */
+function* patchedText(
+  sheet: SheetRead,
+  cells: readonly CellResult[],
+  other: readonly Edit[],
+  options: { values: boolean; cm: number | undefined },
+  state: { changed: boolean },
+  onCells: (n: number) => void,
+): Generator<string> {
+  const text = sheet.text;
+  let pos = 0;
+  let j = 0;
+  const emit = function* (at: number, end: number, xml: string) {
+    if (at < pos) return; // inside an element already replaced
+    state.changed ||= at === end ? xml !== '' : text.slice(at, end) !== xml;
+    yield text.slice(pos, at);
+    yield xml;
+    pos = end;
+  };
+  const STEP = 8192;
+  let k = 0;
+  for (const res of cells) {
+    if (++k === STEP) {
+      onCells(k);
+      k = 0;
+    }
+    const f = res.cell;
+    // Insertions at the cell's own start go before it; replacements there are never planned.
+    while (j < other.length && other[j]!.at <= f.start) {
+      const e = other[j++]!;
+      yield* emit(e.at, e.end, e.text);
+    }
+    if (f.start < pos) continue;
+    const old = text.slice(f.start, f.end);
+    const xml = formulaCellXml(res, old, text.slice(f.fStart, f.fEnd), options);
+    if (xml === old) continue;
+    state.changed = true;
+    yield text.slice(pos, f.start);
+    yield xml;
+    pos = f.end;
+  }
+  while (j < other.length) {
+    const e = other[j++]!;
+    yield* emit(e.at, e.end, e.text);
+  }
+  yield text.slice(pos);
+  onCells(k);
+}
+
 const METADATA_XML = `<?xml version="1.0" encoding="UTF-8" standalone="yes"?>
 <metadata xmlns="${MAIN_NS}" xmlns:xda="http://schemas.microsoft.com/office/spreadsheetml/2017/dynamicarray"><metadataTypes count="1"><metadataType name="XLDAPR" minSupportedVersion="120000" copy="1" pasteAll="1" pasteValues="1" merge="1" splitFirst="1" rowColShift="1" clearFormats="1" clearComments="1" assign="1" coerce="1" cellMeta="1"/></metadataTypes><futureMetadata name="XLDAPR" count="1"><bk><extLst><ext uri="{bdbb8cdc-fa1e-496e-a857-3c3f30c029c3}"><xda:dynamicArrayProperties fDynamic="1" fCollapsed="0"/></ext></extLst></bk></futureMetadata><cellMetadata count="1"><bk><rc t="1" v="0"/></bk></cellMetadata></metadata>`;
 
@@ -341,9 +378,8 @@ export async function patchPackage(
   const taken = new Set(read.entries.map((e) => e.name));
   let cm = read.dynamicArrayCm;
   const added: OutEntry[] = [];
-  const replaced = new Map<string, Uint8Array | string[]>();
+  const replaced = new Map<string, Uint8Array>();
   const dropped = new Set<string>();
-  const changedParts: string[] = [];
 
   if (needsMetadata && cm === undefined && read.metadataPath === undefined) {
     // A metadata part of our own, related from the workbook and typed in [Content_Types].xml.
@@ -368,38 +404,40 @@ export async function patchPackage(
     }
   }
 
-  const total = Math.max(1, read.sheets.length);
+  const total = Math.max(1, cells.length);
   let done = 0;
+  const onCells = (n: number) => options.onProgress((done += n), total);
+  const patched = new Map<string, { pieces: Iterable<string>; state: { changed: boolean } }>();
   for (const [i, sheet] of read.sheets.entries()) {
     const list = bySheet.get(i);
-    if (list && list.length > 0) {
-      const plan = planSheet(sheet, list, { values: options.values, cm });
-      if (plan.formulaEdits.length > 0 || plan.cells.size > 0) {
-        const pieces = applyPlan(sheet, plan);
-        if (pieces) replaced.set(sheet.path, pieces);
-      }
-    }
-    options.onProgress(++done * 0.5, total);
-    await new Promise((r) => setImmediate(r));
+    if (!list || list.length === 0) continue;
+    // Formula cells in the order they stand in the part (as read, unless a caller mixed them).
+    const ordered = list.every((c, k) => k === 0 || list[k - 1]!.cell.start < c.cell.start) ? list : [...list].sort((a, b) => a.cell.start - b.cell.start);
+    const starts = Int32Array.from(ordered, (c) => c.cell.start);
+    const other = otherEdits(sheet, ordered, starts, options);
+    const state = { changed: false };
+    const sheetOptions = { values: options.values, cm };
+    const pieces = patchedText(sheet, ordered, other, sheetOptions, state, onCells);
+    patched.set(sheet.path, { pieces, state });
   }
 
   const out: OutEntry[] = [];
   for (const e of read.entries) {
-    if (dropped.has(e.name)) {
-      changedParts.push(e.name);
-      continue;
-    }
+    if (dropped.has(e.name)) continue;
     const content = replaced.get(e.name);
-    if (content) {
-      out.push(Array.isArray(content) ? { name: e.name, pieces: content } : { name: e.name, content });
-      changedParts.push(e.name);
-    } else out.push({ name: e.name, copy: e, raw: await zip.raw(e) });
+    const sheet = patched.get(e.name);
+    if (content) out.push({ name: e.name, content });
+    else if (sheet) out.push({ name: e.name, pieces: sheet.pieces, changed: () => sheet.state.changed, original: { entry: e, raw: () => zip.raw(e) } });
+    else out.push({ name: e.name, copy: e, raw: await zip.raw(e) });
   }
-  for (const a of added) {
-    out.push(a);
-    changedParts.push(a.name);
-  }
+  out.push(...added);
   const bytes = await writeZip(out);
+  const changedParts = [
+    ...read.entries
+      .map((e) => e.name)
+      .filter((name) => dropped.has(name) || replaced.has(name) || patched.get(name)?.state.changed === true),
+    ...added.map((a) => a.name),
+  ];
   options.onProgress(total, total);
   return { bytes, changedParts };
 }

@@ -150,8 +150,15 @@ export function parseCellRef(ref: string): { row: number; col: number } | undefi
     else if (c >= 97 && c <= 122) col = col * 26 + (c - 96);
     else break;
   }
-  const row = Number(ref.slice(i).replace('$', ''));
-  if (col === 0 || !Number.isInteger(row) || row < 1) return undefined;
+  if (ref.charCodeAt(i) === 36) i++; // $
+  let row = 0;
+  const digitsFrom = i;
+  for (; i < ref.length; i++) {
+    const c = ref.charCodeAt(i);
+    if (c < 48 || c > 57) return undefined;
+    row = row * 10 + (c - 48);
+  }
+  if (col === 0 || i === digitsFrom || row < 1) return undefined;
   return { row, col };
 }
 
@@ -379,6 +386,23 @@ export function formulaTemplate(stored: string, row: number): FormulaTemplate {
   return { engine, stored: toStoredFormula(stored), ours: callsOurFunctions(stored), simple: simpleCall(engine, row) };
 }
 
+/**
+ * Does `stored` read as `source` with the row number `digits` where `source` has ROW_MARK? A
+ * filled-down column is checked against the template of the cell above it this way, without
+ * making the marked text again for every row.
+ */
+export function fitsTemplate(stored: string, source: string, digits: string): boolean {
+  let k = 0;
+  for (let i = 0; i < source.length; i++) {
+    const c = source.charCodeAt(i);
+    if (c === 0) {
+      if (!stored.startsWith(digits, k)) return false;
+      k += digits.length;
+    } else if (stored.charCodeAt(k++) !== c) return false;
+  }
+  return k === stored.length;
+}
+
 interface SharedMaster {
   readonly row: number;
   readonly col: number;
@@ -403,6 +427,10 @@ export function readSheet(
   const shared = new Map<string, SharedMaster>();
   const oldRanges: CellRange[] = [];
   let sheetData = { start: -1, openEnd: -1, closeStart: -1, end: -1, empty: true };
+  /** By column: the template of the last formula read there. */
+  const lastTemplate: (FormulaTemplate | undefined)[] = [];
+  let digits = '';
+  let digitsRow = -1;
 
   let rowNum = 0;
   let rowStart = 0;
@@ -516,7 +544,10 @@ export function readSheet(
         const range = kind === 'array' && fAttrs.ref ? parseRange(fAttrs.ref) : undefined;
         const oldRange = range && (range.bottom > range.top || range.right > range.left) ? range : undefined;
         if (oldRange) oldRanges.push(oldRange);
-        const template = formulaTemplate(stored, rowNum);
+        const above = lastTemplate[col];
+        if (digitsRow !== rowNum) digits = String((digitsRow = rowNum));
+        const template = above?.source !== undefined && fitsTemplate(stored, above.source, digits) ? above : formulaTemplate(stored, rowNum);
+        if (template.source !== undefined) lastTemplate[col] = template;
         formulas.push(new FormulaCell(meta.index, rowNum, col, kind, cStart, end, fStart, fEnd, template, template.source === undefined ? stored : undefined, oldRange, cCm));
         if (cachedValues) (rows[rowNum - 1] ??= [])[col - 1] = cellValue(cType, vText, isText, strings, date1904);
         return;

@@ -146,7 +146,8 @@ export interface CellResult {
 }
 
 function calculateCells(read: PackageRead, onProgress: (done: number, total: number) => void): CellResult[] {
-  const all = read.sheets.flatMap((s) => s.formulas);
+  const all: FormulaCell[] = [];
+  for (const s of read.sheets) for (const f of s.formulas) all.push(f);
   let ours = 0;
   for (const f of all) if (f.ours) ours++;
   let done = 0;
