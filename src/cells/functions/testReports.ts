@@ -1,7 +1,7 @@
 import { impedanceAtTemperature, resistanceAtTemperature } from '../../core/losses';
 import { peakShortCircuitCurrent, SHORT_CIRCUIT_LIMIT_C, shortCircuitTemperature } from '../../core/shortCircuit';
 import { TEST_ITEM_ALIASES, TEST_ITEMS, toleranceLimit, withinTolerance, type TestStandard, type WindingArrangement } from '../../core/testReport';
-import { impedance, kva, lossStandard, material, phases, volts, withSample } from '../arguments';
+import { impedance, kva, lossStandard, material, phases, sourceMva, volts, withSample } from '../arguments';
 import { choice, each, num } from '../declaration';
 
 const GROUP = 'Test reports and short circuit';
@@ -80,7 +80,7 @@ export const ZCORR = each({
   source: 'IEEE C57.12.90 impedance and load-loss temperature correction (from memory)',
   args: [
     num('z', 'fraction', 'Impedance measured at from_c, e.g. 5.62%.', 0.0562),
-    num('kva', 'kVA', 'Nameplate rating.', 1000),
+    kva,
     num('pk_w', 'W', 'Load loss measured at from_c with the impedance.', 9800),
     num('from_c', '°C', 'Winding temperature during the impedance test.', 25),
     num('to_c', '°C', 'Reference temperature: 85 °C (IEEE, 65 °C rise) or 75 °C (IEC).', 85),
@@ -104,7 +104,7 @@ export const IPEAK = each({
     volts,
     impedance,
     num('x_r', 'ratio', 'X/R of the transformer impedance, e.g. 5.', 5),
-    num('source_mva', 'MVA', 'Short-circuit power of the supply; blank for an infinite source.', 500, { optional: true }),
+    sourceMva,
     num('source_x_r', 'ratio', 'X/R of the supply; blank takes it as pure reactance.', 15, { optional: true }),
     phases,
   ],
