@@ -124,25 +124,31 @@ export const AGERATE = each({
 
 type Profile = [loads: Float64Array, ambients: Float64Array, hours: number, ...model: Model];
 
-export const HOTSPOTS = block({
-  name: 'HOTSPOTS',
-  group: GROUP,
-  help: 'Spills the hot-spot temperature over a loading profile, one row per step (the value at the end of the step), for a chart beside XFMR.TOPOILS. Starts from the steady state of the first load; each step solved exactly for its load and ambient.',
-  source: SOURCE,
-  args: profileArgs,
-  result: { type: 'number', unit: '°C', columns: ['hot-spot (°C)'] },
-  compute: (l: Float64Array, a: Float64Array, h: number, ...m: Model) => Array.from(hotSpotProfile(model(...m), l, a, h), (t) => [t]),
-});
+/** A block of one temperature over a loading profile, one row per step: HOTSPOTS and TOPOILS. */
+const temperatureProfile = (name: string, help: string, column: string, profile: typeof hotSpotProfile) =>
+  block({
+    name,
+    group: GROUP,
+    help,
+    source: SOURCE,
+    args: profileArgs,
+    result: { type: 'number', unit: '°C', columns: [column] },
+    compute: (l: Float64Array, a: Float64Array, h: number, ...m: Model) => Array.from(profile(model(...m), l, a, h), (t) => [t]),
+  });
 
-export const TOPOILS = block({
-  name: 'TOPOILS',
-  group: GROUP,
-  help: 'Spills the top-oil temperature over a loading profile, one row per step (the value at the end of the step), with the same arguments as XFMR.HOTSPOTS so the two series chart side by side.',
-  source: SOURCE,
-  args: profileArgs,
-  result: { type: 'number', unit: '°C', columns: ['top-oil (°C)'] },
-  compute: (l: Float64Array, a: Float64Array, h: number, ...m: Model) => Array.from(topOilProfile(model(...m), l, a, h), (t) => [t]),
-});
+export const HOTSPOTS = temperatureProfile(
+  'HOTSPOTS',
+  'Spills the hot-spot temperature over a loading profile, one row per step (the value at the end of the step), for a chart beside XFMR.TOPOILS. Starts from the steady state of the first load; each step solved exactly for its load and ambient.',
+  'hot-spot (°C)',
+  hotSpotProfile,
+);
+
+export const TOPOILS = temperatureProfile(
+  'TOPOILS',
+  'Spills the top-oil temperature over a loading profile, one row per step (the value at the end of the step), with the same arguments as XFMR.HOTSPOTS so the two series chart side by side.',
+  'top-oil (°C)',
+  topOilProfile,
+);
 
 const agingCompute =
   (f: typeof equivalentAging) =>
