@@ -150,32 +150,39 @@ export const TOPOILS = temperatureProfile(
   topOilProfile,
 );
 
-const agingCompute =
-  (f: typeof equivalentAging) =>
-  (...[l, a, h, c, top, gradient, ratio, m, p]: [...Profile, paper: Paper | undefined]) => {
-    const unit = model(c, top, gradient, ratio, m);
-    return f(unit, l, a, h, paperOf(unit, p));
-  };
+/**
+ * An aging integral over a loading profile, with the unit's paper or its row's: FEQA and
+ * LIFEUSED, the same integral per hour and in hours.
+ */
+const agingOverProfile = (name: string, help: string, clause5: string, resultUnit: string, f: typeof equivalentAging) =>
+  each({
+    name,
+    group: GROUP,
+    help,
+    source: `${SOURCE}; IEEE C57.91 clause 5 ${clause5} (from memory)`,
+    args: [...profileArgs, paper],
+    result: { type: 'number', unit: resultUnit },
+    compute: (...[l, a, h, c, top, gradient, ratio, m, p]: [...Profile, paper: Paper | undefined]) => {
+      const unit = model(c, top, gradient, ratio, m);
+      return f(unit, l, a, h, paperOf(unit, p));
+    },
+  });
 
-export const FEQA = each({
-  name: 'FEQA',
-  group: GROUP,
-  help: 'Equivalent aging factor over a loading profile: Σ ∫ aging rate dt ÷ Σ hours, the rate integrated along each step\'s hot-spot curve; 1 means the insulation aged as fast as at the paper\'s reference hot-spot (110 °C upgraded, 98 °C normal).',
-  source: `${SOURCE}; IEEE C57.91 clause 5 equivalent aging (from memory)`,
-  args: [...profileArgs, paper],
-  result: { type: 'number', unit: 'per unit of normal aging' },
-  compute: agingCompute(equivalentAging),
-});
+export const FEQA = agingOverProfile(
+  'FEQA',
+  'Equivalent aging factor over a loading profile: Σ ∫ aging rate dt ÷ Σ hours, the rate integrated along each step\'s hot-spot curve; 1 means the insulation aged as fast as at the paper\'s reference hot-spot (110 °C upgraded, 98 °C normal).',
+  'equivalent aging',
+  'per unit of normal aging',
+  equivalentAging,
+);
 
-export const LIFEUSED = each({
-  name: 'LIFEUSED',
-  group: GROUP,
-  help: "Insulation life consumed over a loading profile, in hours at the paper's reference hot-spot (Σ ∫ aging rate dt). Divide by the normal life for a fraction: 180,000 h (IEEE C57.91 / IEC 60076-7 normal-life table), or the heat-run block's figure.",
-  source: `${SOURCE}; IEEE C57.91 clause 5 loss of life (from memory)`,
-  args: [...profileArgs, paper],
-  result: { type: 'number', unit: 'h' },
-  compute: agingCompute(lifeUsedHours),
-});
+export const LIFEUSED = agingOverProfile(
+  'LIFEUSED',
+  "Insulation life consumed over a loading profile, in hours at the paper's reference hot-spot (Σ ∫ aging rate dt). Divide by the normal life for a fraction: 180,000 h (IEEE C57.91 / IEC 60076-7 normal-life table), or the heat-run block's figure.",
+  'loss of life',
+  'h',
+  lifeUsedHours,
+);
 
 export const MAXLOAD = each({
   name: 'MAXLOAD',
