@@ -233,6 +233,22 @@ function coerceRange(arg: ArgDecl, m: unknown[][], isError: IsError): ArgValue {
 /** True when an argument reads this matrix whole: it has a range reader of exactly this shape. */
 const readWhole = (arg: ArgDecl, m: unknown[][]): boolean => arg.range !== undefined && m.length === arg.range.rows && m[0]!.length === arg.range.cols;
 
+/**
+ * Step 2 for an argument coerced whole, once a call — a series, or a range its reader takes as one
+ * value: the value goes into buf[k] and nothing is returned. Any other argument's cells are
+ * returned, for the caller to read cell by cell.
+ */
+function coerceWhole(arg: ArgDecl, raw: unknown, isError: IsError, buf: ArgValue[], k: number): unknown[][] | undefined {
+  if (arg.series) {
+    buf[k] = coerceSeries(arg, raw, isError);
+    return undefined;
+  }
+  const m = asMatrix(arg.name, raw);
+  if (!readWhole(arg, m)) return m;
+  buf[k] = coerceRange(arg, m, isError);
+  return undefined;
+}
+
 // ---------------------------------------------------------------------------------------------
 // Step 3: evaluate — compute's refusals and results as cells
 // ---------------------------------------------------------------------------------------------
@@ -306,15 +322,8 @@ function prepare({ decls, readers, isError }: Adapted, raw: unknown[]): Prepared
   let constantFault: Fault | undefined;
   for (let k = 0; k < n; k++) {
     const d = decls[k]!;
-    if (d.series) {
-      buf[k] = coerceSeries(d, raw[k], isError);
-      continue;
-    }
-    const m = asMatrix(d.name, raw[k]);
-    if (readWhole(d, m)) {
-      buf[k] = coerceRange(d, m, isError);
-      continue;
-    }
+    const m = coerceWhole(d, raw[k], isError, buf, k);
+    if (m === undefined) continue;
     shape.include(d.name, m);
     const r = m.length;
     const c = m[0]!.length;
@@ -367,15 +376,8 @@ function runEach(a: Adapted, call: (b: ArgValue[]) => Scalar, raw: unknown[]): u
 function runBlock({ decls, readers, makeError, isError }: Adapted, compute: BlockCompute, raw: unknown[]): unknown[][] {
   const values = new Array<ArgValue>(decls.length);
   decls.forEach((d, k) => {
-    if (d.series) {
-      values[k] = coerceSeries(d, raw[k], isError);
-      return;
-    }
-    const m = asMatrix(d.name, raw[k]);
-    if (readWhole(d, m)) {
-      values[k] = coerceRange(d, m, isError);
-      return;
-    }
+    const m = coerceWhole(d, raw[k], isError, values, k);
+    if (m === undefined) return;
     if (m.length !== 1 || m[0]!.length !== 1) {
       throw new WholeResultFault(refused(d.name, `is ${m.length}×${m[0]!.length} cells; this function takes a single value here`));
     }

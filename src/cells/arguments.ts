@@ -25,6 +25,7 @@ export const pk = num('pk_w', 'W', 'Load loss at rated current, at reference tem
 export const phases = num('phases', 'phases', '1 or 3.', 3, { default: 3 });
 export const volts = num('v', 'V', 'Voltage, line-to-line for three-phase.', 480);
 export const impedance = num('z', 'fraction', 'Impedance as a percentage of the rating, e.g. 5.75%.', 0.0575);
+export const sourceMva = num('source_mva', 'MVA', 'Short-circuit power of the supply; blank for an infinite source.', 500, { optional: true });
 
 // Loading.
 export const load = num('load', 'per unit', 'Load as a fraction of nameplate kVA; 1 = full load, 50% = half load.', 0.5);

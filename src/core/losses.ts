@@ -84,18 +84,11 @@ export function resistanceAtTemperature(ohms: number, fromC: number, toC: number
  * C57.12.90 does it (from memory): only the resistive part changes with temperature. With the
  * load loss Pk measured at `fromC`, the resistive part is r = Pk / (kVA·1000) per unit; the
  * reactive part x = √(z² − r²) stays; the loss is moved to `toC` as LOSSTEMP moves it, and
- * z(to) = √(x² + r(to)²).
+ * z(to) = √(x² + r(to)²). After z and kva come LOSSTEMP's own arguments (pkWatts, fromC, toC,
+ * i2rWatts, material, standard), passed on unchanged.
  */
-export function impedanceAtTemperature(
-  z: number,
-  kva: number,
-  pkWatts: number,
-  fromC: number,
-  toC: number,
-  i2rWatts: number | undefined,
-  material: ConductorMaterial,
-  standard: LossStandard,
-): number {
+export function impedanceAtTemperature(z: number, kva: number, ...loss: Parameters<typeof loadLossAtTemperature>): number {
+  const [pkWatts] = loss;
   const zm = perUnitImpedance('z', z);
   const s = positive('kva', kva) * 1000;
   const rm = nonNegative('pk_w', pkWatts) / s;
@@ -103,7 +96,7 @@ export function impedanceAtTemperature(
     throw new InputError('pk_w', `${shown(pkWatts)} W is ${shown(rm * 100)} % of the rating, not less than the impedance z (${shown(zm * 100)} %); check pk_w and kva`);
   }
   const x2 = zm * zm - rm * rm;
-  const rt = loadLossAtTemperature(pkWatts, fromC, toC, i2rWatts, material, standard) / s;
+  const rt = loadLossAtTemperature(...loss) / s;
   return Math.sqrt(x2 + rt * rt);
 }
 

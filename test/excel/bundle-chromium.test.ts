@@ -14,21 +14,7 @@ import { tmpdir } from 'node:os';
 import { extname, join, normalize, sep } from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import {
-  bigColumnCall,
-  BIG_ROWS,
-  builtFunctionIds,
-  distDir,
-  expectedResult,
-  invocationCalls,
-  omittedOptionalCalls,
-  outOfDomainCall,
-  readDist,
-  sampleCalls,
-  STAND_IN,
-  wrongKindCalls,
-  type Call,
-} from './bundle-harness';
+import { answersAsTheAdapter, distDir, readDist, STAND_IN, type Call } from './bundle-harness';
 
 const CHROMIUM = '/usr/bin/chromium';
 const CHROMIUM_ARGS = [
@@ -116,14 +102,6 @@ describe.skipIf(!haveChromium && !inCI)('dist/functions.js in headless Chromium'
     return JSON.stringify(got) === JSON.stringify(want);
   }
 
-  async function expectAsInNode(calls: readonly Call[]): Promise<void> {
-    const got = await run(calls);
-    calls.forEach((c, i) => {
-      const want = expectedResult(c);
-      if (!sameResult(got[i], want)) expect(got[i], c.label).toEqual(want);
-    });
-  }
-
   beforeAll(async () => {
     if (!haveChromium) throw new Error(`${CHROMIUM} is missing: CI must install Debian's chromium (.ci/run does when [ -x ${CHROMIUM} ] fails)`);
     readDist('functions.js'); // fail first, and clearly, when the build has not run
@@ -158,35 +136,10 @@ describe.skipIf(!haveChromium && !inCI)('dist/functions.js in headless Chromium'
     expect(pageErrors).toEqual([]);
   });
 
-  it('registers exactly the functions in functions.json', async () => {
-    const registered = await page.evaluate(() => (globalThis as any).__fluxbook.ids() as string[]);
-    expect(registered).toEqual([...builtFunctionIds()].sort());
-  });
-
-  it('answers every function called with its samples as the adapter does', async () => {
-    await expectAsInNode(sampleCalls());
-  });
-
-  it('applies the defaults of omitted optional arguments as the adapter does', async () => {
-    await expectAsInNode(omittedOptionalCalls());
-  });
-
-  it('ignores an invocation object appended after the declared arguments', async () => {
-    await expectAsInNode(invocationCalls());
-  });
-
-  it('gives #VALUE! naming the argument for a wrong-kind or refused value', async () => {
-    const calls = [...wrongKindCalls(), outOfDomainCall()];
-    await expectAsInNode(calls);
-    const [eff] = await run([calls.find((c) => c.id === 'EFF')!]);
-    expect(eff).toEqual([[{ error: '#VALUE!', message: 'argument kva: "twelve" is text; a number is needed (kVA)' }]]);
-  });
-
-  it(`returns ${BIG_ROWS} results for a ${BIG_ROWS}-row range in one call`, async () => {
-    const call = bigColumnCall();
-    const [got] = (await run([call])) as unknown[][][];
-    expect(got).toHaveLength(BIG_ROWS);
-    expect(got).toEqual(expectedResult(call));
+  answersAsTheAdapter({
+    run,
+    ids: () => page.evaluate(() => (globalThis as any).__fluxbook.ids() as string[]),
+    same: sameResult,
   });
 
   it("makes no network request beyond the test server's own origin", async () => {

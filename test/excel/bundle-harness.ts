@@ -1,9 +1,12 @@
 /**
  * Shared by the bundle tests (node:vm and Chromium): the CustomFunctions stand-in, the calls built
- * from each declaration's samples, and what the adapter gives for them in Node.
+ * from each declaration's samples, what the adapter gives for them in Node, and the checks every
+ * runtime passes (answersAsTheAdapter).
  */
 import { existsSync, readFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
+import { isDeepStrictEqual } from 'node:util';
+import { expect, it } from 'vitest';
 import { adapt, CellError, plainErrors } from '../../src/cells/adapter';
 import { catalog } from '../../src/cells/catalog';
 import type { ArgDecl, CellFunctionDecl } from '../../src/cells/declaration';
@@ -152,4 +155,75 @@ export function expectedResult(call: Call): unknown {
     row.map((v) => (v instanceof CellError ? (v.kind === 'NUM' ? { error: v.code } : { error: v.code, message: v.message }) : v)),
   );
   return JSON.parse(JSON.stringify(cells));
+}
+
+/** How a bundle test reaches its runtime, once its beforeAll has loaded the bundle there. */
+export interface Runtime {
+  /** Runs a batch of calls in the bundle; one answer per call, in the stand-in's JSON form. */
+  run(calls: readonly Call[]): unknown[] | Promise<unknown[]>;
+  /** The ids the bundle registered, as the stand-in lists them (sorted). */
+  ids(): string[] | Promise<string[]>;
+  /** Whether an answer counts as the adapter's; equality unless the runtime's arithmetic differs. */
+  same?(got: unknown, want: unknown): boolean;
+}
+
+/**
+ * The checks every runtime passes, declared inside the test's describe: the registered functions
+ * are the built ones, and each batch of calls is answered as the adapter answers it in Node.
+ */
+export function answersAsTheAdapter(runtime: Runtime): void {
+  const same = runtime.same ?? isDeepStrictEqual;
+  async function expectAsInNode(calls: readonly Call[]): Promise<unknown[]> {
+    const got = await runtime.run(calls);
+    calls.forEach((c, i) => {
+      const want = expectedResult(c);
+      if (!same(got[i], want)) expect(got[i], c.label).toEqual(want);
+    });
+    return got;
+  }
+
+  it('registers exactly the functions in functions.json', async () => {
+    const registered = [...(await runtime.ids())];
+    expect(registered).toEqual([...builtFunctionIds()].sort());
+    expect(registered).toEqual(catalog.map((d) => d.name).sort());
+  });
+
+  it('answers every function called with its samples as the adapter does', async () => {
+    const calls = sampleCalls();
+    const got = await expectAsInNode(calls);
+    // A sample is a valid value: none of them may come back as an error.
+    got.forEach((r, i) => expect(JSON.stringify(r), calls[i]!.label).not.toMatch(/"error"/));
+  });
+
+  it('applies the defaults of omitted optional arguments as the adapter does', async () => {
+    await expectAsInNode(omittedOptionalCalls());
+  });
+
+  it('ignores an invocation object appended after the declared arguments', async () => {
+    await expectAsInNode(invocationCalls());
+  });
+
+  it('gives #VALUE! naming the argument for a value of the wrong kind', async () => {
+    const calls = wrongKindCalls();
+    const got = await expectAsInNode(calls);
+    got.forEach((r, i) => {
+      expect(r, calls[i]!.label).toEqual([[{ error: '#VALUE!', message: expect.stringContaining(`argument ${calls[i]!.argument}:`) }]]);
+    });
+    // The worked case: text where EFF wants a kVA rating.
+    const eff = calls.findIndex((c) => c.id === 'EFF');
+    expect(got[eff]).toEqual([[{ error: '#VALUE!', message: 'argument kva: "twelve" is text; a number is needed (kVA)' }]]);
+  });
+
+  it('gives #VALUE! naming the argument for a value the core refuses', async () => {
+    const [got] = await expectAsInNode([outOfDomainCall()]);
+    expect(got).toEqual([[{ error: '#VALUE!', message: expect.stringMatching(/^argument kva: /) }]]);
+  });
+
+  it(`returns ${BIG_ROWS} results for a ${BIG_ROWS}-row range in one call`, async () => {
+    const call = bigColumnCall();
+    const [got] = (await runtime.run([call])) as unknown[][][];
+    expect(got).toHaveLength(BIG_ROWS);
+    expect(got!.every((row) => row.length === 1 && typeof row[0] === 'number')).toBe(true);
+    expect(got).toEqual(expectedResult(call));
+  });
 }

@@ -30,6 +30,15 @@ function expectToTableRounding(computed: number, published: string): void {
   expect(Math.abs(computed - Number(published))).toBeLessThanOrEqual(0.5 * 10 ** -decimals + 1e-12);
 }
 
+// IEC 60076-7 table of relative aging rates (from memory): hot-spot °C, the thermally upgraded
+// paper column (the same law as IEEE's F_AA, printed to three significant figures) and the
+// non-upgraded paper column.
+const AGING_RATES: [number, string, string][] = [
+  [80, '0.036', '0.125'], [86, '0.073', '0.25'], [92, '0.145', '0.5'], [98, '0.282', '1.0'],
+  [104, '0.536', '2.0'], [110, '1.0', '4.0'], [116, '1.83', '8.0'], [122, '3.29', '16.0'],
+  [128, '5.80', '32.0'], [134, '10.1', '64.0'], [140, '17.2', '128.0'],
+];
+
 describe('aging acceleration factor, thermally upgraded paper', () => {
   it('is 1 at the 110 °C reference hot-spot (IEEE C57.91 clause 5, from memory)', () => {
     expect(agingAccelerationFactor(110)).toBe(1);
@@ -40,13 +49,7 @@ describe('aging acceleration factor, thermally upgraded paper', () => {
     expect(agingAccelerationFactor(130)).toBeCloseTo(6.9842, 4);
   });
 
-  // IEC 60076-7 table of relative aging rates, thermally upgraded paper column (from memory; the
-  // column is the same law as IEEE's F_AA, printed to three significant figures).
-  const upgraded: [number, string][] = [
-    [80, '0.036'], [86, '0.073'], [92, '0.145'], [98, '0.282'], [104, '0.536'], [110, '1.0'],
-    [116, '1.83'], [122, '3.29'], [128, '5.80'], [134, '10.1'], [140, '17.2'],
-  ];
-  it.each(upgraded)('at %i °C matches the IEC 60076-7 table value %s (from memory)', (t, v) => {
+  it.each(AGING_RATES.map(([t, upgraded]): [number, string] => [t, upgraded]))('at %i °C matches the IEC 60076-7 table value %s (from memory)', (t, v) => {
     expectToTableRounding(relativeAgingRate(t, 'upgraded'), v);
   });
 });
@@ -62,12 +65,7 @@ describe('relative aging rate, normal (kraft) paper', () => {
     }
   });
 
-  // IEC 60076-7 table of relative aging rates, non-upgraded paper column (from memory).
-  const normal: [number, string][] = [
-    [80, '0.125'], [86, '0.25'], [92, '0.5'], [98, '1.0'], [104, '2.0'], [110, '4.0'],
-    [116, '8.0'], [122, '16.0'], [128, '32.0'], [134, '64.0'], [140, '128.0'],
-  ];
-  it.each(normal)('at %i °C matches the IEC 60076-7 table value %s (from memory)', (t, v) => {
+  it.each(AGING_RATES.map(([t, , normal]): [number, string] => [t, normal]))('at %i °C matches the IEC 60076-7 table value %s (from memory)', (t, v) => {
     expectToTableRounding(relativeAgingRate(t, 'normal'), v);
   });
 });

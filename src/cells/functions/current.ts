@@ -1,5 +1,5 @@
 import { apparentPowerKva, faultCurrent, ratedCurrent, windingCurrent, type WindingSide } from '../../core/current';
-import { blankable, impedance, kva, phases, volts, withSample } from '../arguments';
+import { blankable, impedance, kva, phases, sourceMva, volts, withSample } from '../arguments';
 import { choice, each, num, text } from '../declaration';
 
 const GROUP = 'Current and power';
@@ -57,7 +57,7 @@ export const ISC = each({
     kva,
     volts,
     impedance,
-    num('source_mva', 'MVA', 'Short-circuit power of the supply; blank for an infinite source.', 500, { optional: true }),
+    sourceMva,
     phases,
   ],
   result: { type: 'number', unit: 'A' },

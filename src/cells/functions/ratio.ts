@@ -19,6 +19,8 @@ const vectorGroup = text(
   'Dyn11',
   { optional: true },
 );
+/** The nameplate ratio's arguments: RATIO takes them, and the ratio-test functions compare with it. */
+const nameplate = [hv, lv, vectorGroup] as const;
 
 /** Turns of the input and output windings of the ideal transformer. */
 const turns = [num('turns_in', 'turns', 'Turns of the input winding.', 100), num('turns_out', 'turns', 'Turns of the output winding.', 10)] as const;
@@ -28,7 +30,7 @@ export const RATIO = each({
   group: GROUP,
   help: 'Winding turns ratio HV:LV; with a vector group, the ratio of the phase-winding voltages (Dyn11: hv / (lv/√3)).',
   source: 'IEC 60076-1 (vector groups); ideal transformer, Vs/Vp = Ns/Np',
-  args: [hv, lv, vectorGroup],
+  args: [...nameplate],
   result: { type: 'number', unit: 'ratio' },
   compute: turnsRatio,
 });
@@ -99,7 +101,7 @@ export const RATIODEV = each({
   group: GROUP,
   help: 'Deviation of a measured turns ratio from the nameplate ratio, as a fraction: (measured − nameplate) / nameplate.',
   source: 'IEEE C57.12.90 ratio test; IEC 60076-1 Table 1',
-  args: [measured, hv, lv, vectorGroup],
+  args: [measured, ...nameplate],
   result: { type: 'number', unit: 'fraction' },
   compute: ratioDeviation,
 });
@@ -111,9 +113,7 @@ export const RATIOOK = each({
   source: 'IEEE C57.12.00 ratio tolerance ±0.5 % (from memory); IEC 60076-1 Table 1',
   args: [
     measured,
-    hv,
-    lv,
-    vectorGroup,
+    ...nameplate,
     num('tolerance', 'fraction', 'Allowed deviation as a percentage; IEC 60076-1 also caps it at 1/10 of the impedance percentage.', 0.005, {
       default: 0.005,
     }),

@@ -1,15 +1,18 @@
 import { impedanceAtTemperature, resistanceAtTemperature } from '../../core/losses';
 import { peakShortCircuitCurrent, SHORT_CIRCUIT_LIMIT_C, shortCircuitTemperature } from '../../core/shortCircuit';
 import { TEST_ITEM_ALIASES, TEST_ITEMS, toleranceLimit, withinTolerance, type TestStandard, type WindingArrangement } from '../../core/testReport';
-import { impedance, kva, lossStandard, material, phases, volts, withSample } from '../arguments';
+import { impedance, kva, lossStandard, material, phases, sourceMva, volts, withSample } from '../arguments';
 import { choice, each, num } from '../declaration';
 
 const GROUP = 'Test reports and short circuit';
 
-const item = choice(
-  'item',
-  'What is checked: "no-load loss" (p0), "load loss" (pk), "total loss" (total), "impedance" (z), "ratio" or "no-load current" (i0).',
-  { options: TEST_ITEMS, aliases: TEST_ITEM_ALIASES },
+const item = withSample(
+  choice(
+    'item',
+    'What is checked: "no-load loss" (p0), "load loss" (pk), "total loss" (total), "impedance" (z), "ratio" or "no-load current" (i0).',
+    { options: TEST_ITEMS, aliases: TEST_ITEM_ALIASES },
+  ),
+  'total loss',
 );
 const standard = choice('standard', '"IEC" (IEC 60076-1 Table 1) or "IEEE" (IEEE C57.12.00).', {
   options: ['IEC', 'IEEE'] as const satisfies readonly TestStandard[],
@@ -29,7 +32,7 @@ export const TESTTOL = each({
   help: 'Highest (bound "upper") or lowest ("lower") test result the standard accepts for a guarantee: losses +15 % each and +10 % total (IEC) or no-load +10 % and total +6 % (IEEE); impedance ±7.5 % / ±10 %; ratio the lower of ±0.5 % and z/10 (IEC) or ±0.5 % (IEEE); no-load current +30 % (IEC). #N/A where the standard sets no such limit.',
   source: 'IEC 60076-1 Table 1 (losses and ratio rows confirmed in a stored copy of the 1993+A1 edition; impedance and no-load current from memory); IEEE C57.12.00 tolerances (from memory; impedance row as quoted for IEEE dry-type units)',
   args: [
-    withSample(item, 'total loss'),
+    item,
     num('guaranteed', 'as the item', 'Guaranteed (declared) value: W for losses, a fraction for impedance and no-load current (e.g. 6%), the ratio itself for ratio.', 12000),
     standard,
     choice('bound', '"upper" for the highest accepted result, "lower" for the lowest.', { options: ['upper', 'lower'], default: 'upper' }),
@@ -48,7 +51,7 @@ export const TESTOK = each({
   args: [
     num('measured', 'as the item', 'Result from the test report, in the unit of the guarantee.', 12800),
     num('guaranteed', 'as the item', 'Guaranteed (declared) value.', 12000),
-    withSample(item, 'total loss'),
+    item,
     standard,
     zForRatio,
     windings,
@@ -80,7 +83,7 @@ export const ZCORR = each({
   source: 'IEEE C57.12.90 impedance and load-loss temperature correction (from memory)',
   args: [
     num('z', 'fraction', 'Impedance measured at from_c, e.g. 5.62%.', 0.0562),
-    num('kva', 'kVA', 'Nameplate rating.', 1000),
+    kva,
     num('pk_w', 'W', 'Load loss measured at from_c with the impedance.', 9800),
     num('from_c', '°C', 'Winding temperature during the impedance test.', 25),
     num('to_c', '°C', 'Reference temperature: 85 °C (IEEE, 65 °C rise) or 75 °C (IEC).', 85),
@@ -104,7 +107,7 @@ export const IPEAK = each({
     volts,
     impedance,
     num('x_r', 'ratio', 'X/R of the transformer impedance, e.g. 5.', 5),
-    num('source_mva', 'MVA', 'Short-circuit power of the supply; blank for an infinite source.', 500, { optional: true }),
+    sourceMva,
     num('source_x_r', 'ratio', 'X/R of the supply; blank takes it as pure reactance.', 15, { optional: true }),
     phases,
   ],

@@ -124,52 +124,65 @@ export const AGERATE = each({
 
 type Profile = [loads: Float64Array, ambients: Float64Array, hours: number, ...model: Model];
 
-export const HOTSPOTS = block({
-  name: 'HOTSPOTS',
-  group: GROUP,
-  help: 'Spills the hot-spot temperature over a loading profile, one row per step (the value at the end of the step), for a chart beside XFMR.TOPOILS. Starts from the steady state of the first load; each step solved exactly for its load and ambient.',
-  source: SOURCE,
-  args: profileArgs,
-  result: { type: 'number', unit: '°C', columns: ['hot-spot (°C)'] },
-  compute: (l: Float64Array, a: Float64Array, h: number, ...m: Model) => Array.from(hotSpotProfile(model(...m), l, a, h), (t) => [t]),
-});
+/** A block of one temperature over a loading profile, one row per step: HOTSPOTS and TOPOILS. */
+const temperatureProfile = (name: string, help: string, column: string, profile: typeof hotSpotProfile) =>
+  block({
+    name,
+    group: GROUP,
+    help,
+    source: SOURCE,
+    args: profileArgs,
+    result: { type: 'number', unit: '°C', columns: [column] },
+    compute: (l: Float64Array, a: Float64Array, h: number, ...m: Model) => Array.from(profile(model(...m), l, a, h), (t) => [t]),
+  });
 
-export const TOPOILS = block({
-  name: 'TOPOILS',
-  group: GROUP,
-  help: 'Spills the top-oil temperature over a loading profile, one row per step (the value at the end of the step), with the same arguments as XFMR.HOTSPOTS so the two series chart side by side.',
-  source: SOURCE,
-  args: profileArgs,
-  result: { type: 'number', unit: '°C', columns: ['top-oil (°C)'] },
-  compute: (l: Float64Array, a: Float64Array, h: number, ...m: Model) => Array.from(topOilProfile(model(...m), l, a, h), (t) => [t]),
-});
+export const HOTSPOTS = temperatureProfile(
+  'HOTSPOTS',
+  'Spills the hot-spot temperature over a loading profile, one row per step (the value at the end of the step), for a chart beside XFMR.TOPOILS. Starts from the steady state of the first load; each step solved exactly for its load and ambient.',
+  'hot-spot (°C)',
+  hotSpotProfile,
+);
 
-const agingCompute =
-  (f: typeof equivalentAging) =>
-  (...[l, a, h, c, top, gradient, ratio, m, p]: [...Profile, paper: Paper | undefined]) => {
-    const unit = model(c, top, gradient, ratio, m);
-    return f(unit, l, a, h, paperOf(unit, p));
-  };
+export const TOPOILS = temperatureProfile(
+  'TOPOILS',
+  'Spills the top-oil temperature over a loading profile, one row per step (the value at the end of the step), with the same arguments as XFMR.HOTSPOTS so the two series chart side by side.',
+  'top-oil (°C)',
+  topOilProfile,
+);
 
-export const FEQA = each({
-  name: 'FEQA',
-  group: GROUP,
-  help: 'Equivalent aging factor over a loading profile: Σ ∫ aging rate dt ÷ Σ hours, the rate integrated along each step\'s hot-spot curve; 1 means the insulation aged as fast as at the paper\'s reference hot-spot (110 °C upgraded, 98 °C normal).',
-  source: `${SOURCE}; IEEE C57.91 clause 5 equivalent aging (from memory)`,
-  args: [...profileArgs, paper],
-  result: { type: 'number', unit: 'per unit of normal aging' },
-  compute: agingCompute(equivalentAging),
-});
+/**
+ * An aging integral over a loading profile, with the unit's paper or its row's: FEQA and
+ * LIFEUSED, the same integral per hour and in hours.
+ */
+const agingOverProfile = (name: string, help: string, clause5: string, resultUnit: string, f: typeof equivalentAging) =>
+  each({
+    name,
+    group: GROUP,
+    help,
+    source: `${SOURCE}; IEEE C57.91 clause 5 ${clause5} (from memory)`,
+    args: [...profileArgs, paper],
+    result: { type: 'number', unit: resultUnit },
+    compute: (...[l, a, h, c, top, gradient, ratio, m, p]: [...Profile, paper: Paper | undefined]) => {
+      const unit = model(c, top, gradient, ratio, m);
+      return f(unit, l, a, h, paperOf(unit, p));
+    },
+  });
 
-export const LIFEUSED = each({
-  name: 'LIFEUSED',
-  group: GROUP,
-  help: "Insulation life consumed over a loading profile, in hours at the paper's reference hot-spot (Σ ∫ aging rate dt). Divide by the normal life for a fraction: 180,000 h (IEEE C57.91 / IEC 60076-7 normal-life table), or the heat-run block's figure.",
-  source: `${SOURCE}; IEEE C57.91 clause 5 loss of life (from memory)`,
-  args: [...profileArgs, paper],
-  result: { type: 'number', unit: 'h' },
-  compute: agingCompute(lifeUsedHours),
-});
+export const FEQA = agingOverProfile(
+  'FEQA',
+  'Equivalent aging factor over a loading profile: Σ ∫ aging rate dt ÷ Σ hours, the rate integrated along each step\'s hot-spot curve; 1 means the insulation aged as fast as at the paper\'s reference hot-spot (110 °C upgraded, 98 °C normal).',
+  'equivalent aging',
+  'per unit of normal aging',
+  equivalentAging,
+);
+
+export const LIFEUSED = agingOverProfile(
+  'LIFEUSED',
+  "Insulation life consumed over a loading profile, in hours at the paper's reference hot-spot (Σ ∫ aging rate dt). Divide by the normal life for a fraction: 180,000 h (IEEE C57.91 / IEC 60076-7 normal-life table), or the heat-run block's figure.",
+  'loss of life',
+  'h',
+  lifeUsedHours,
+);
 
 export const MAXLOAD = each({
   name: 'MAXLOAD',

@@ -95,70 +95,71 @@ export const NORMAL_LIFE_HOURS = 180_000;
 
 const IEC_TABLE_4 = 'IEC 60076-7 Table 4 (from memory)';
 
+/** The figures a row takes from its table, in the order the table gives them. */
+type TableFigures = Pick<
+  ThermalCharacteristics,
+  'oilExponent' | 'windingExponent' | 'lossRatio' | 'hotSpotFactor' | 'topOilRise' | 'hotSpotGradient' | 'oilTimeConstant' | 'windingTimeConstant' | 'k11' | 'k21' | 'k22'
+>;
+
+/** An IEC 60076-7 Table 4 row: kraft paper (the table's rated points reach 98 °C) and the normal life. */
+function iecRow(cooling: Cooling, unit: 'distribution' | 'power', figures: TableFigures): ThermalCharacteristics {
+  const units = unit === 'distribution' ? 'distribution transformers' : 'medium and large power transformers';
+  return { method: 'IEC', cooling, unit, ...figures, paper: 'normal', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEC_TABLE_4}, ${units}, ${cooling}` };
+}
+
 /** IEC 60076-7 Table 4, distribution transformers (ONAN only). */
-export const IEC_DISTRIBUTION_ONAN: ThermalCharacteristics = {
-  method: 'IEC', cooling: 'ONAN', unit: 'distribution',
+export const IEC_DISTRIBUTION_ONAN: ThermalCharacteristics = iecRow('ONAN', 'distribution', {
   oilExponent: 0.8, windingExponent: 1.6, lossRatio: 5, hotSpotFactor: 1.1,
   topOilRise: 55, hotSpotGradient: 23, oilTimeConstant: 180, windingTimeConstant: 4,
-  k11: 1.0, k21: 1.0, k22: 2.0, paper: 'normal', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEC_TABLE_4}, distribution transformers, ONAN`,
-};
+  k11: 1.0, k21: 1.0, k22: 2.0,
+});
 
 /** IEC 60076-7 Table 4, medium and large power transformers. */
 export const IEC_POWER: Readonly<Record<Cooling, ThermalCharacteristics>> = {
-  ONAN: {
-    method: 'IEC', cooling: 'ONAN', unit: 'power',
+  ONAN: iecRow('ONAN', 'power', {
     oilExponent: 0.8, windingExponent: 1.3, lossRatio: 6, hotSpotFactor: 1.3,
     topOilRise: 52, hotSpotGradient: 26, oilTimeConstant: 210, windingTimeConstant: 10,
-    k11: 0.5, k21: 2.0, k22: 2.0, paper: 'normal', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEC_TABLE_4}, medium and large power transformers, ONAN`,
-  },
-  ONAF: {
-    method: 'IEC', cooling: 'ONAF', unit: 'power',
+    k11: 0.5, k21: 2.0, k22: 2.0,
+  }),
+  ONAF: iecRow('ONAF', 'power', {
     oilExponent: 0.8, windingExponent: 1.3, lossRatio: 6, hotSpotFactor: 1.3,
     topOilRise: 52, hotSpotGradient: 26, oilTimeConstant: 150, windingTimeConstant: 7,
-    k11: 0.5, k21: 2.0, k22: 2.0, paper: 'normal', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEC_TABLE_4}, medium and large power transformers, ONAF`,
-  },
-  OF: {
-    method: 'IEC', cooling: 'OF', unit: 'power',
+    k11: 0.5, k21: 2.0, k22: 2.0,
+  }),
+  OF: iecRow('OF', 'power', {
     oilExponent: 1.0, windingExponent: 1.3, lossRatio: 6, hotSpotFactor: 1.3,
     topOilRise: 56, hotSpotGradient: 22, oilTimeConstant: 90, windingTimeConstant: 7,
-    k11: 1.0, k21: 1.3, k22: 1.0, paper: 'normal', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEC_TABLE_4}, medium and large power transformers, OF`,
-  },
-  OD: {
-    method: 'IEC', cooling: 'OD', unit: 'power',
+    k11: 1.0, k21: 1.3, k22: 1.0,
+  }),
+  OD: iecRow('OD', 'power', {
     oilExponent: 1.0, windingExponent: 2.0, lossRatio: 6, hotSpotFactor: 1.3,
     topOilRise: 49, hotSpotGradient: 29, oilTimeConstant: 90, windingTimeConstant: 7,
-    k11: 1.0, k21: 1.0, k22: 1.0, paper: 'normal', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEC_TABLE_4}, medium and large power transformers, OD`,
-  },
+    k11: 1.0, k21: 1.0, k22: 1.0,
+  }),
 };
 
 const IEEE_EXPONENTS = 'IEEE C57.91 exponents n, m (from memory); 55 K + 25 K rated rises (common practice, 65 °C-rise unit)';
 
+/**
+ * An IEEE C57.91 clause 7 row: exponents n and m, a 65 °C-rise unit's 55 K + 25 K rated rises, the
+ * clause 7 model (k11 = k21 = k22 = 1) on upgraded paper, and the loss ratio and time constants of
+ * the IEC 60076-7 Table 4 row `iec` (named `borrowed` in the source).
+ */
+function ieeeRow(cooling: Cooling, n: number, m: number, iec: ThermalCharacteristics, borrowed: string, exponentsNote = ''): ThermalCharacteristics {
+  return {
+    method: 'IEEE', cooling, unit: 'any',
+    oilExponent: n, windingExponent: 2 * m, lossRatio: iec.lossRatio, hotSpotFactor: null,
+    topOilRise: 55, hotSpotGradient: 25, oilTimeConstant: iec.oilTimeConstant, windingTimeConstant: iec.windingTimeConstant,
+    k11: 1, k21: 1, k22: 1, paper: 'upgraded', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEEE_EXPONENTS}${exponentsNote}; R, τo, τw from ${IEC_TABLE_4}, ${borrowed}`,
+  };
+}
+
 /** IEEE C57.91 clause 7, with the borrowed loss ratio and time constants named in the header. */
 export const IEEE_ROWS: Readonly<Record<Cooling, ThermalCharacteristics>> = {
-  ONAN: {
-    method: 'IEEE', cooling: 'ONAN', unit: 'any',
-    oilExponent: 0.8, windingExponent: 2 * 0.8, lossRatio: 5, hotSpotFactor: null,
-    topOilRise: 55, hotSpotGradient: 25, oilTimeConstant: 180, windingTimeConstant: 4,
-    k11: 1, k21: 1, k22: 1, paper: 'upgraded', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEEE_EXPONENTS}; R, τo, τw from ${IEC_TABLE_4}, distribution ONAN`,
-  },
-  ONAF: {
-    method: 'IEEE', cooling: 'ONAF', unit: 'any',
-    oilExponent: 0.9, windingExponent: 2 * 0.8, lossRatio: 6, hotSpotFactor: null,
-    topOilRise: 55, hotSpotGradient: 25, oilTimeConstant: 150, windingTimeConstant: 7,
-    k11: 1, k21: 1, k22: 1, paper: 'upgraded', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEEE_EXPONENTS}; R, τo, τw from ${IEC_TABLE_4}, ONAF`,
-  },
-  OF: {
-    method: 'IEEE', cooling: 'OF', unit: 'any',
-    oilExponent: 0.9, windingExponent: 2 * 0.8, lossRatio: 6, hotSpotFactor: null,
-    topOilRise: 55, hotSpotGradient: 25, oilTimeConstant: 90, windingTimeConstant: 7,
-    k11: 1, k21: 1, k22: 1, paper: 'upgraded', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEEE_EXPONENTS} (non-directed OFAF/OFWF); R, τo, τw from ${IEC_TABLE_4}, OF`,
-  },
-  OD: {
-    method: 'IEEE', cooling: 'OD', unit: 'any',
-    oilExponent: 1.0, windingExponent: 2 * 1.0, lossRatio: 6, hotSpotFactor: null,
-    topOilRise: 55, hotSpotGradient: 25, oilTimeConstant: 90, windingTimeConstant: 7,
-    k11: 1, k21: 1, k22: 1, paper: 'upgraded', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEEE_EXPONENTS} (directed ODAF/ODWF); R, τo, τw from ${IEC_TABLE_4}, OD`,
-  },
+  ONAN: ieeeRow('ONAN', 0.8, 0.8, IEC_DISTRIBUTION_ONAN, 'distribution ONAN'),
+  ONAF: ieeeRow('ONAF', 0.9, 0.8, IEC_POWER.ONAF, 'ONAF'),
+  OF: ieeeRow('OF', 0.9, 0.8, IEC_POWER.OF, 'OF', ' (non-directed OFAF/OFWF)'),
+  OD: ieeeRow('OD', 1.0, 1.0, IEC_POWER.OD, 'OD', ' (directed ODAF/ODWF)'),
 };
 
 /** Every row once, for the tests and the docs. */

@@ -270,36 +270,30 @@ export function cyclicCapability(m: ThermalCharacteristics, loads: Float64Array,
     evaluations++;
     return 10 * Math.log(runProfile(m, loads, ambients, stepHours, { scale: f, paper: m.paper }).agingHours / hours);
   };
-  const noAnswer = () => new NoAnswerError('even with no load the profile is not within the limits: the ambient alone takes the top oil or the aging past them');
+  // The root of g below `upper`, where g(upper) > 0: bracketed by f = 1 (or half of upper), else by 0.
+  const rootUnder = (g: (f: number) => number, upper: number, atUpper: number): number => {
+    const first = Math.min(1, 0.5 * upper);
+    const atFirst = g(first);
+    if (atFirst <= 0) return rootBelow(g, first, atFirst, upper, atUpper, budget);
+    const atZero = g(0);
+    if (atZero > 0) {
+      throw new NoAnswerError('even with no load the profile is not within the limits: the ambient alone takes the top oil or the aging past them');
+    }
+    return rootBelow(g, 0, atZero, first, atFirst, budget);
+  };
 
   let factor = cap;
   let boundBy: CyclicCapability['boundBy'] = 'load';
   const atCap = temperature(cap);
   if (atCap > 0) {
     boundBy = 'temperature or aging';
-    const first = Math.min(1, 0.5 * cap);
-    const atFirst = temperature(first);
-    if (atFirst <= 0) {
-      factor = rootBelow(temperature, first, atFirst, cap, atCap, budget);
-    } else {
-      const atZero = temperature(0);
-      if (atZero > 0) throw noAnswer();
-      factor = rootBelow(temperature, 0, atZero, first, atFirst, budget);
-    }
+    factor = rootUnder(temperature, cap, atCap);
   }
   if (limits.agingBudget) {
     const atFactor = aging(factor);
     if (atFactor > 0) {
       boundBy = 'temperature or aging';
-      const first = Math.min(1, 0.5 * factor);
-      const atFirst = aging(first);
-      if (atFirst <= 0) {
-        factor = rootBelow(aging, first, atFirst, factor, atFactor, budget);
-      } else {
-        const atZero = aging(0);
-        if (atZero > 0) throw noAnswer();
-        factor = rootBelow(aging, 0, atZero, first, atFirst, budget);
-      }
+      factor = rootUnder(aging, factor, atFactor);
     }
   }
   return { factor, evaluations, boundBy };
