@@ -104,11 +104,14 @@ export interface BlockDecl extends CommonDecl {
 
 export type CellFunctionDecl = EachDecl | BlockDecl;
 
-/** What a declaration file writes: compute typed from the declared arguments. */
-type Spec<A extends readonly ArgDecl[], R> = Omit<CommonDecl, 'args'> & {
+/** What a group file writes for one function: compute typed from the declared arguments. */
+type GroupSpec<A extends readonly ArgDecl[], R> = Omit<CommonDecl, 'args' | 'group'> & {
   readonly args: A;
   readonly compute: (...args: ArgValues<A>) => R;
 };
+
+/** A declaration with its group. */
+type Spec<A extends readonly ArgDecl[], R> = GroupSpec<A, R> & { readonly group: string };
 
 /** The option shapes of the builders: required, with a default, or blank-able without one. */
 interface NoDefault {
@@ -199,4 +202,15 @@ export function each<const A extends readonly ArgDecl[]>(decl: Spec<A, Scalar>):
 
 export function block<const A extends readonly ArgDecl[]>(decl: Spec<A, Scalar[][]>): BlockDecl {
   return { kind: 'block', ...decl, compute: decl.compute as unknown as BlockCompute };
+}
+
+/**
+ * each and block for the functions of one group, which then need not repeat it:
+ * `const { each, block } = inGroup('Efficiency')` at the top of a group file.
+ */
+export function inGroup(group: string) {
+  return {
+    each: <const A extends readonly ArgDecl[]>(decl: GroupSpec<A, Scalar>): EachDecl => each({ ...decl, group }),
+    block: <const A extends readonly ArgDecl[]>(decl: GroupSpec<A, Scalar[][]>): BlockDecl => block({ ...decl, group }),
+  };
 }

@@ -1,11 +1,12 @@
 import { meetsEfficiencyRule, type Rule } from '../../core/efficiencyRules';
 import { bil, doeKind, doeLevels, kva, p0, phases, pk, withSample } from '../arguments';
-import { choice, each, num } from '../declaration';
+import { choice, inGroup, num } from '../declaration';
+
+const { each } = inGroup('Efficiency regulations');
 
 /** Kept in its own group file so it stands at the end of the catalog. */
 export const COMPLIES = each({
   name: 'COMPLIES',
-  group: 'Efficiency regulations',
   help: 'TRUE when test-report losses meet the rule: "DOE" (efficiency at the test load ≥ DOEMIN; losses at 60 Hz, load loss at 55 °C liquid-immersed or 75 °C dry-type), "EU" (p0_w and pk_w ≤ EUMAXLOSS, three-phase liquid only; 50 Hz, load loss at 75 °C) or "both", which takes the DOE losses in p0_w, pk_w and the EU losses in p0_eu_w, pk_eu_w.',
   source: '10 CFR 431.196 and its test procedure (10 CFR 431 subpart K, appendix A); EU Regulation 548/2014 Annex I Table I.1 Tier 2 (EU values from memory)',
   args: [

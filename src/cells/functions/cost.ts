@@ -1,8 +1,8 @@
 import { loadLossWorth, lossEnergyCost, noLoadLossWorth, totalOwningCost } from '../../core/cost';
 import { loads, p0, pk, stepHours } from '../arguments';
-import { each, num } from '../declaration';
+import { inGroup, num } from '../declaration';
 
-const GROUP = 'Cost';
+const { each } = inGroup('Cost');
 const price = num('price_kwh', 'money/kWh', 'Price of a kWh of energy lost, in your currency.', 0.12);
 const rate = num('rate', 'fraction', 'Interest (discount) rate a year, e.g. 6%; 0 for no discounting. No default: it is your evaluation policy.', 0.06);
 const years = num('years', 'years', 'Evaluation period, a whole number of years from 1 to 100. No default: it is your evaluation policy.', 25);
@@ -11,7 +11,6 @@ const demand = num('demand_kw_year', 'money/kW·year', 'Demand (capacity) charge
 
 export const AFACTOR = each({
   name: 'AFACTOR',
-  group: GROUP,
   help: 'A factor: present worth of one watt of no-load loss, (price_kwh × hours + demand_kw_year) / 1000 × (1 − (1 + rate)^−years) / rate (× years when rate is 0).',
   source: 'present worth of a level annuity applied to loss energy (common practice; loss capitalisation as stated in manufacturers’ guidance); demand charge as in IEEE C57.120 loss evaluation (from memory)',
   args: [price, rate, years, hoursAYear, demand],
@@ -21,7 +20,6 @@ export const AFACTOR = each({
 
 export const BFACTOR = each({
   name: 'BFACTOR',
-  group: GROUP,
   help: 'B factor: present worth of one watt of rated load loss, (price_kwh × hours × loss_factor + demand_kw_year × responsibility²) / 1000 × the present-worth factor × peak_load².',
   source: 'present worth of a level annuity applied to loss energy (common practice; loss capitalisation as stated in manufacturers’ guidance); demand charge and responsibility factor as in IEEE C57.120 loss evaluation (from memory)',
   args: [
@@ -42,7 +40,6 @@ export const BFACTOR = each({
 
 export const TOC = each({
   name: 'TOC',
-  group: GROUP,
   help: 'Total owning cost: price + a × p0_w + b × pk_w, with a and b from AFACTOR and BFACTOR.',
   source: 'total owning cost, TOC = price + A·P0 + B·Pk (common practice)',
   args: [
@@ -58,7 +55,6 @@ export const TOC = each({
 
 export const LOSSCOST = each({
   name: 'LOSSCOST',
-  group: GROUP,
   help: 'Cost of the energy lost over a loading profile, not discounted: Σ (p0_w + pk_w × load²) × hours / 1000 × price_kwh.',
   source: 'common practice',
   args: [

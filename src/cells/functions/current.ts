@@ -1,12 +1,11 @@
 import { apparentPowerKva, faultCurrent, ratedCurrent, windingCurrent, type WindingSide } from '../../core/current';
 import { blankable, impedance, kva, phases, sourceMva, volts, withSample } from '../arguments';
-import { choice, each, num, text } from '../declaration';
+import { choice, inGroup, num, text } from '../declaration';
 
-const GROUP = 'Current and power';
+const { each } = inGroup('Current and power');
 
 export const IRATED = each({
   name: 'IRATED',
-  group: GROUP,
   help: 'Rated line current: kVA·1000 / (√3·V) three-phase, kVA·1000 / V single-phase.',
   source: 'S = √3·V·I (common practice)',
   args: [kva, volts, phases],
@@ -16,7 +15,6 @@ export const IRATED = each({
 
 export const IWINDING = each({
   name: 'IWINDING',
-  group: GROUP,
   help: 'Current in one phase winding: line current / √3 in a delta winding, the line current in star or zigzag. Give the letter of the winding v belongs to, or a whole vector group with side "HV" or "LV".',
   source: 'delta phase current = line current / √3 (common practice)',
   args: [
@@ -40,7 +38,6 @@ export const IWINDING = each({
 
 export const KVA = each({
   name: 'KVA',
-  group: GROUP,
   help: 'Apparent power from line current and voltage: √3·V·I / 1000 three-phase, V·I / 1000 single-phase.',
   source: 'S = √3·V·I (common practice)',
   args: [num('a', 'A', 'Line current.', 1202.8), volts, phases],
@@ -50,7 +47,6 @@ export const KVA = each({
 
 export const ISC = each({
   name: 'ISC',
-  group: GROUP,
   help: 'Symmetrical short-circuit current at the secondary terminals: rated current / (z + kVA / source kVA); leave source_mva blank for an infinite source.',
   source: 'IEC 60076-5 clause 4.2 (from memory); Isc = Ir / z for an infinite bus (common practice)',
   args: [

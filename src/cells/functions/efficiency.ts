@@ -1,12 +1,11 @@
 import { efficiencyAt, efficiencyCurve, maxEfficiency, maxEfficiencyLoad, peakEfficiencyIndex } from '../../core/efficiency';
 import { kva, load, p0, pf, pk } from '../arguments';
-import { block, each, num } from '../declaration';
+import { inGroup, num } from '../declaration';
 
-const GROUP = 'Efficiency';
+const { block, each } = inGroup('Efficiency');
 
 export const EFF = each({
   name: 'EFF',
-  group: GROUP,
   help: 'Efficiency at a per-unit load and power factor: output / (output + p0_w + pk_w × load²).',
   source: 'η = P_out / (P_out + P0 + x²·Pk) (textbook standard)',
   args: [kva, p0, pk, load, pf],
@@ -16,7 +15,6 @@ export const EFF = each({
 
 export const EFFMAXLOAD = each({
   name: 'EFFMAXLOAD',
-  group: GROUP,
   help: 'Per-unit load at which efficiency is highest, where load loss equals no-load loss: √(p0_w / pk_w).',
   source: 'textbook standard',
   args: [p0, pk],
@@ -26,7 +24,6 @@ export const EFFMAXLOAD = each({
 
 export const EFFMAX = each({
   name: 'EFFMAX',
-  group: GROUP,
   help: 'The highest efficiency the unit reaches, at load √(p0_w / pk_w).',
   source: 'textbook standard',
   args: [kva, p0, pk, pf],
@@ -36,7 +33,6 @@ export const EFFMAX = each({
 
 export const EFFCURVE = block({
   name: 'EFFCURVE',
-  group: GROUP,
   help: 'Spills an efficiency curve: one row per load step from 0 to max_load, columns load | efficiency | total losses (W).',
   source: 'textbook standard',
   args: [
@@ -53,7 +49,6 @@ export const EFFCURVE = block({
 
 export const PEI = each({
   name: 'PEI',
-  group: GROUP,
   help: 'Peak efficiency index: 1 − 2(P0 + Pc0) / (Sr·√((P0 + Pc0)/Pk)), with Pc0 the cooling power at no load.',
   source: 'EU Regulation 548/2014 Annex I (from memory)',
   args: [kva, p0, pk, num('pc0_w', 'W', 'Power the cooling draws at no load; 0 for ONAN.', 0, { default: 0 })],

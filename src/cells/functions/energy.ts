@@ -1,13 +1,12 @@
 import { allDayEfficiency, energyDelivered, energyLost, loadFactor, lossFactor, lossFactorEstimate } from '../../core/energy';
 import { kva, loads, p0, pk, stepHours as hours } from '../arguments';
-import { each, num, series } from '../declaration';
+import { inGroup, num, series } from '../declaration';
 
-const GROUP = 'All-day energy';
+const { each } = inGroup('All-day energy');
 const pfs = series('pfs', 'power factor', 'Power factor: one value for the whole profile or one per step.', [0.9], { default: 1 });
 
 export const ALLDAY = each({
   name: 'ALLDAY',
-  group: GROUP,
   help: 'All-day (energy) efficiency over a loading profile: kWh out / (kWh out + kWh lost).',
   source: 'all-day efficiency (textbook standard)',
   args: [kva, p0, pk, loads, pfs, hours],
@@ -17,7 +16,6 @@ export const ALLDAY = each({
 
 export const ELOSS = each({
   name: 'ELOSS',
-  group: GROUP,
   help: 'Energy lost in the unit over a loading profile: Σ (p0_w + pk_w × load²) × hours / 1000.',
   source: 'common practice',
   args: [p0, pk, loads, hours],
@@ -27,7 +25,6 @@ export const ELOSS = each({
 
 export const EOUT = each({
   name: 'EOUT',
-  group: GROUP,
   help: 'Energy delivered over a loading profile: Σ load × kva × pf × hours.',
   source: 'common practice',
   args: [kva, loads, pfs, hours],
@@ -37,7 +34,6 @@ export const EOUT = each({
 
 export const LOADFACTOR = each({
   name: 'LOADFACTOR',
-  group: GROUP,
   help: 'Load factor of a profile of equal steps: mean load / peak load.',
   source: 'common practice',
   args: [loads],
@@ -47,7 +43,6 @@ export const LOADFACTOR = each({
 
 export const LOSSFACTOR = each({
   name: 'LOSSFACTOR',
-  group: GROUP,
   help: 'Loss factor of a profile of equal steps, exact: mean of load² / peak load².',
   source: 'common practice',
   args: [loads],
@@ -57,7 +52,6 @@ export const LOSSFACTOR = each({
 
 export const LSF = each({
   name: 'LSF',
-  group: GROUP,
   help: 'Loss factor estimated from the load factor: k × LF + (1 − k) × LF²; k about 0.3, lower (0.15–0.2) for peaky loads.',
   source: 'empirical loss-factor relation (common practice; usually credited to Buller and Woodrow, from memory)',
   args: [

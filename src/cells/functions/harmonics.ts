@@ -1,12 +1,11 @@
 import { harmonicDerating, harmonicLossFactor, kFactor, type SpectrumBasis } from '../../core/harmonics';
-import { choice, each, num, series } from '../declaration';
+import { choice, inGroup, num, series } from '../declaration';
 
-const GROUP = 'Losses';
+const { each } = inGroup('Losses');
 const orders = series('orders', 'order', 'Harmonic orders, 1 for the fundamental, e.g. 1, 5, 7, 11, 13.', [1, 5, 7, 11, 13]);
 
 export const HLF = each({
   name: 'HLF',
-  group: GROUP,
   help: 'Harmonic loss factor: Σ (I_h·h)² / Σ I_h², the winding eddy loss of the spectrum per unit of that of a sine of the same rms. Currents in any one unit.',
   source: 'IEEE C57.110 harmonic loss factor F_HL',
   args: [orders, series('currents', 'A or per unit', 'Current at each order, one per order, in any one unit (A, % of fundamental...).', [100, 20, 14, 9.1, 7.7])],
@@ -16,7 +15,6 @@ export const HLF = each({
 
 export const KFACTOR = each({
   name: 'KFACTOR',
-  group: GROUP,
   help: 'K-factor: Σ (I_h·h)² with each current per unit of the transformer’s rated current (basis "rated", the default). A spectrum in per cent of the fundamental, as meters report it, needs basis "fundamental": it is then scaled to the rated rms current, and K equals HLF.',
   source: 'UL 1561/1562 K-factor definition',
   args: [
@@ -33,7 +31,6 @@ export const KFACTOR = each({
 
 export const HDERATE = each({
   name: 'HDERATE',
-  group: GROUP,
   help: 'Largest per-unit load current with that harmonic content: √((1 + eddy_pu) / (1 + hlf × eddy_pu)).',
   source: 'IEEE C57.110 maximum non-sinusoidal current, dry-type method (from memory)',
   args: [

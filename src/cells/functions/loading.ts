@@ -1,7 +1,9 @@
 import { cyclicMax, GAS_BUBBLE_CAUTION_C, loadingLimits, profileCheck, weightedAmbient, type LoadingCategory, type ThermalMethod, type UnitSize } from '../../core/thermal';
 import { thermalMethod } from '../arguments';
-import { block, each, series } from '../declaration';
+import { inGroup, series } from '../declaration';
 import { BEYOND_NAMEPLATE, category, checkArgs, GROUP, modelOf, size, type CoolingArg } from './thermalArguments';
+
+const { block, each } = inGroup(GROUP);
 
 type Check = [
   loads: Float64Array,
@@ -25,7 +27,6 @@ function checked(...[l, a, h, cat, sz, c, top, gradient, ratio, m]: Check) {
 
 export const LOADLIMITS = block({
   name: 'LOADLIMITS',
-  group: GROUP,
   help: `Spills the limits a loading category allows — top-oil, hot-spot, load per unit, whether normal aging (F_EQA ≤ 1) is also required — with the guide's name for it, the ${GAS_BUBBLE_CAUTION_C} °C gas-bubble caution and the source. IEEE C57.91 categories for method "IEEE", IEC 60076-7 for "IEC"/"IEC-POWER". ${BEYOND_NAMEPLATE}`,
   source: LIMITS_SOURCE,
   args: [category, size, thermalMethod],
@@ -47,7 +48,6 @@ export const LOADLIMITS = block({
 
 export const LOADOK = each({
   name: 'LOADOK',
-  group: GROUP,
   help: `TRUE when a loading profile stays within the category's limits at every step — load, top-oil and hot-spot at each step's end — and, for normal loading, ages no faster than normal over the profile (F_EQA ≤ 1). ${BEYOND_NAMEPLATE}`,
   source: LIMITS_SOURCE,
   args: checkArgs,
@@ -57,7 +57,6 @@ export const LOADOK = each({
 
 export const LOADCHECK = block({
   name: 'LOADCHECK',
-  group: GROUP,
   help: `Spills a short report of a loading profile against a category: peak top-oil, hot-spot and load with their steps (1 = the first), F_EQA, life used in hours and as a fraction of the normal life, the first limit exceeded and its step ("none"), the verdict of XFMR.LOADOK and whether the hot-spot passes the ${GAS_BUBBLE_CAUTION_C} °C gas-bubble caution. ${BEYOND_NAMEPLATE}`,
   source: LIMITS_SOURCE,
   args: checkArgs,
@@ -85,7 +84,6 @@ export const LOADCHECK = block({
 
 export const CYCLICMAX = each({
   name: 'CYCLICMAX',
-  group: GROUP,
   help: `The largest factor by which the whole loading profile can be multiplied and still pass XFMR.LOADOK — how much more load the unit can take on the same cycle. Two root searches (temperatures, then aging): 7 to 12 runs of the profile as a rule, never more than 40, an 8,760-hour year included. #NUM! when even no load passes. ${BEYOND_NAMEPLATE}`,
   source: LIMITS_SOURCE,
   args: checkArgs,
@@ -96,7 +94,6 @@ export const CYCLICMAX = each({
 
 export const AMBIENTW = each({
   name: 'AMBIENTW',
-  group: GROUP,
   help: 'Weighted ambient temperature of IEC 60076-7 from the twelve monthly mean temperatures: yearly mean + 0.01 × [2 × (hottest month − yearly mean)]^1.85, the constant ambient that ages the insulation as the year does. Give it as the ambients of a profile function (one cell is a constant ambient).',
   source: 'IEC 60076-7 weighted ambient temperature (from memory)',
   args: [series('monthly_means', '°C', 'The twelve monthly mean ambient temperatures of the year, January to December.', [-2, -1, 3, 8, 13, 17, 19, 18, 14, 9, 4, 0])],

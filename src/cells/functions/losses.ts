@@ -1,12 +1,11 @@
 import { loadLossAt, loadLossAtTemperature, totalLossesAt } from '../../core/losses';
 import { load, lossStandard, material, p0, pk } from '../arguments';
-import { each, num } from '../declaration';
+import { inGroup, num } from '../declaration';
 
-const GROUP = 'Losses';
+const { each } = inGroup('Losses');
 
 export const LOADLOSS = each({
   name: 'LOADLOSS',
-  group: GROUP,
   help: 'Load (winding) loss at a per-unit load: pk_w × load².',
   source: 'I²R loss scales with current squared (common practice)',
   args: [pk, load],
@@ -16,7 +15,6 @@ export const LOADLOSS = each({
 
 export const LOSSES = each({
   name: 'LOSSES',
-  group: GROUP,
   help: 'Total losses at a per-unit load: no-load loss + load loss × load².',
   source: 'common practice',
   args: [p0, pk, load],
@@ -30,7 +28,6 @@ const REFERENCE_TEMPERATURES =
 
 export const LOSSTEMP = each({
   name: 'LOSSTEMP',
-  group: GROUP,
   help: `Load loss moved from one winding temperature to another: the I²R part by (Tk + to)/(Tk + from), the stray part inversely. Usual reference temperatures: ${REFERENCE_TEMPERATURES}. With i2r_w blank the whole loss is taken as I²R when correcting hotter (the largest the result can be) and refused when correcting cooler, where that would understate the loss.`,
   source: 'IEEE C57.12.90 load-loss temperature correction; IEC 60076-1 clause 11.4 (from memory)',
   args: [

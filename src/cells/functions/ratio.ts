@@ -8,9 +8,9 @@ import {
   turnsRatio,
   vectorGroupShift,
 } from '../../core/ratio';
-import { each, num, text } from '../declaration';
+import { inGroup, num, text } from '../declaration';
 
-const GROUP = 'Ratio and voltage';
+const { each } = inGroup('Ratio and voltage');
 const hv = num('hv_v', 'V', 'HV rated voltage, line-to-line for three-phase.', 13200);
 const lv = num('lv_v', 'V', 'LV rated voltage, line-to-line for three-phase.', 480);
 const vectorGroup = text(
@@ -27,7 +27,6 @@ const turns = [num('turns_in', 'turns', 'Turns of the input winding.', 100), num
 
 export const RATIO = each({
   name: 'RATIO',
-  group: GROUP,
   help: 'Winding turns ratio HV:LV; with a vector group, the ratio of the phase-winding voltages (Dyn11: hv / (lv/√3)).',
   source: 'IEC 60076-1 (vector groups); ideal transformer, Vs/Vp = Ns/Np',
   args: [...nameplate],
@@ -37,7 +36,6 @@ export const RATIO = each({
 
 export const VOUT = each({
   name: 'VOUT',
-  group: GROUP,
   help: 'Ideal transformer output voltage: v_in × turns_out / turns_in.',
   source: 'ideal transformer, Vs/Vp = Ns/Np (common practice)',
   args: [
@@ -50,7 +48,6 @@ export const VOUT = each({
 
 export const IOUT = each({
   name: 'IOUT',
-  group: GROUP,
   help: 'Ideal transformer output current: i_in × turns_in / turns_out (current goes the inverse way of voltage).',
   source: 'ideal transformer, Is/Ip = Np/Ns (common practice)',
   args: [
@@ -65,7 +62,6 @@ const step = num('step', 'fraction', 'Voltage change per tap step as a percentag
 
 export const TAPV = each({
   name: 'TAPV',
-  group: GROUP,
   help: 'Voltage of a tapped winding at a tap position: rated_v × (1 + step × position); position 0 is the principal tap.',
   source: 'IEC 60076-1 tapping quantities (common practice)',
   args: [
@@ -79,7 +75,6 @@ export const TAPV = each({
 
 export const TAPBEST = each({
   name: 'TAPBEST',
-  group: GROUP,
   help: 'HV tap position whose LV voltage is nearest the target for the given supply voltage; ties go to the position nearer the principal tap.',
   source: 'IEC 60076-1 tapping quantities (common practice)',
   args: [
@@ -98,7 +93,6 @@ const measured = num('measured_ratio', 'ratio', 'Turns ratio read by the ratio t
 
 export const RATIODEV = each({
   name: 'RATIODEV',
-  group: GROUP,
   help: 'Deviation of a measured turns ratio from the nameplate ratio, as a fraction: (measured − nameplate) / nameplate.',
   source: 'IEEE C57.12.90 ratio test; IEC 60076-1 Table 1',
   args: [measured, ...nameplate],
@@ -108,7 +102,6 @@ export const RATIODEV = each({
 
 export const RATIOOK = each({
   name: 'RATIOOK',
-  group: GROUP,
   help: 'TRUE when a measured turns ratio is within tolerance of the nameplate ratio (default ±0.5 %).',
   source: 'IEEE C57.12.00 ratio tolerance ±0.5 % (from memory); IEC 60076-1 Table 1',
   args: [
@@ -124,7 +117,6 @@ export const RATIOOK = each({
 
 export const SHIFT = each({
   name: 'SHIFT',
-  group: GROUP,
   help: 'Phase displacement of LV behind HV in degrees for a vector group: clock number × 30°.',
   source: 'IEC 60076-1 clause 3.10 and Annex D (vector groups)',
   args: [text('vector_group', 'Three-phase vector group such as Dyn11.', 'Dyn11')],

@@ -1,12 +1,11 @@
 import { baseImpedance, parallelShare, percentReactance, percentResistance, voltageRegulation } from '../../core/voltageRegulation';
 import { kva, pk, volts } from '../arguments';
-import { block, bool, each, num, series } from '../declaration';
+import { bool, inGroup, num, series } from '../declaration';
 
-const GROUP = 'Regulation and impedance';
+const { block, each } = inGroup('Regulation and impedance');
 
 export const RPCT = each({
   name: 'RPCT',
-  group: GROUP,
   help: 'Per-unit resistance from the load loss: pk_w / (kva × 1000); shows as a percentage (%R = Pk / (10 × kVA)).',
   source: '%R = Pk / (10·kVA), Pk in W (common practice)',
   args: [pk, kva],
@@ -16,7 +15,6 @@ export const RPCT = each({
 
 export const XPCT = each({
   name: 'XPCT',
-  group: GROUP,
   help: 'Per-unit reactance from impedance and resistance: √(z² − r²).',
   source: 'impedance triangle, X = √(Z² − R²) (common practice)',
   args: [
@@ -29,7 +27,6 @@ export const XPCT = each({
 
 export const REG = each({
   name: 'REG',
-  group: GROUP,
   help: 'Voltage regulation, exact phasor form with the secondary held at rated voltage: |1 + load·(cos φ ∓ j sin φ)(r + jx)| − 1. Negative when a leading load raises the voltage.',
   source: 'phasor diagram of the series-impedance model, secondary at rated voltage (textbook standard)',
   args: [
@@ -45,7 +42,6 @@ export const REG = each({
 
 export const ZBASE = each({
   name: 'ZBASE',
-  group: GROUP,
   help: 'Base impedance in ohms: v² / (kva × 1000); multiply a per-unit impedance by it to get ohms.',
   source: 'Z_base = V² / S (common practice)',
   args: [volts, kva],
@@ -55,7 +51,6 @@ export const ZBASE = each({
 
 export const SHARE = block({
   name: 'SHARE',
-  group: GROUP,
   help: 'Spills how units in parallel share a load, in proportion to kVA / z: one row per unit, columns share (kVA) | per-unit loading | overloaded (TRUE above 1). Assumes equal ratios and similar X/R.',
   source: 'parallel operation, load divides inversely as the impedances in ohms (common practice)',
   args: [

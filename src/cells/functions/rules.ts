@@ -1,12 +1,11 @@
 import { doeMinimumEfficiency, euMaximumLoss } from '../../core/efficiencyRules';
 import { bil, doeKind, doeLevels, kva, phases, withSample } from '../arguments';
-import { bool, choice, each, num } from '../declaration';
+import { bool, choice, inGroup, num } from '../declaration';
 
-const GROUP = 'Efficiency regulations';
+const { each } = inGroup('Efficiency regulations');
 
 export const DOEMIN = each({
   name: 'DOEMIN',
-  group: GROUP,
   help: 'US DOE minimum efficiency at the regulation’s test load (50 % of nameplate; 35 % for low-voltage dry-type) and power factor 1; ratings between table rows by linear interpolation, as the regulation directs. Units with an input above 34.5 kV or an output above 600 V are outside the regulation: #N/A. Blank voltages are taken as within it.',
   source: '10 CFR 431.196 (a)(2)–(a)(3), (b)(2)–(b)(4), (c)(2)–(c)(3); scope of 10 CFR 431.192',
   args: [
@@ -24,7 +23,6 @@ export const DOEMIN = each({
 
 export const EUMAXLOSS = each({
   name: 'EUMAXLOSS',
-  group: GROUP,
   help: 'EU Ecodesign Tier 2 maximum loss of a three-phase liquid-immersed, ground-mounted medium power transformer (≤ 3150 kVA, windings Um ≤ 24 kV and ≤ 1.1 kV): which = "pk" (load loss) or "p0" (no-load loss). Higher Um or pole-mounted: #N/A (other tables of Annex I, not held). Blank Um values are taken as within the table. Table values from memory: confirm against the regulation.',
   source: 'EU Regulation 548/2014 Annex I Table I.1 Tier 2, as amended by 2019/1783 (values from memory)',
   args: [

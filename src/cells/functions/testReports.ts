@@ -2,9 +2,9 @@ import { impedanceAtTemperature, resistanceAtTemperature } from '../../core/loss
 import { peakShortCircuitCurrent, SHORT_CIRCUIT_LIMIT_C, shortCircuitTemperature } from '../../core/shortCircuit';
 import { TEST_ITEM_ALIASES, TEST_ITEMS, toleranceLimit, withinTolerance, type TestStandard, type WindingArrangement } from '../../core/testReport';
 import { impedance, kva, lossStandard, material, phases, sourceMva, volts, withSample } from '../arguments';
-import { choice, each, num } from '../declaration';
+import { choice, inGroup, num } from '../declaration';
 
-const GROUP = 'Test reports and short circuit';
+const { each } = inGroup('Test reports and short circuit');
 
 const item = withSample(
   choice(
@@ -28,7 +28,6 @@ const windings = choice('windings', '"two-winding" (default) or "other": three o
 
 export const TESTTOL = each({
   name: 'TESTTOL',
-  group: GROUP,
   help: 'Highest (bound "upper") or lowest ("lower") test result the standard accepts for a guarantee: losses +15 % each and +10 % total (IEC) or no-load +10 % and total +6 % (IEEE); impedance ±7.5 % / ±10 %; ratio the lower of ±0.5 % and z/10 (IEC) or ±0.5 % (IEEE); no-load current +30 % (IEC). #N/A where the standard sets no such limit.',
   source: 'IEC 60076-1 Table 1 (losses and ratio rows confirmed in a stored copy of the 1993+A1 edition; impedance and no-load current from memory); IEEE C57.12.00 tolerances (from memory; impedance row as quoted for IEEE dry-type units)',
   args: [
@@ -45,7 +44,6 @@ export const TESTTOL = each({
 
 export const TESTOK = each({
   name: 'TESTOK',
-  group: GROUP,
   help: 'TRUE when a test result lies within the standard’s tolerance of its guarantee (see TESTTOL); a result on the limit passes. A component loss passes on its own +15 % (IEC) only if the total loss passes too: check "total loss" as well.',
   source: 'IEC 60076-1 Table 1; IEEE C57.12.00 tolerances (see TESTTOL)',
   args: [
@@ -62,7 +60,6 @@ export const TESTOK = each({
 
 export const RCORR = each({
   name: 'RCORR',
-  group: GROUP,
   help: 'Winding resistance at another temperature: r_ohm × (Tk + to_c) / (Tk + from_c), Tk 234.5 (copper, IEEE), 235 (copper, IEC) or 225 (aluminium).',
   source: 'IEEE C57.12.90 and IEC 60076-1 resistance temperature correction (from memory); copper Tk checked against the 0.00393 /K coefficient of annealed copper',
   args: [
@@ -78,7 +75,6 @@ export const RCORR = each({
 
 export const ZCORR = each({
   name: 'ZCORR',
-  group: GROUP,
   help: 'Impedance moved to the reference temperature as IEEE C57.12.90 does it: the resistive part pk_w / (kva × 1000) is corrected with the load loss (see LOSSTEMP), the reactive part √(z² − r²) stays. i2r_w as in LOSSTEMP: needed when correcting cooler.',
   source: 'IEEE C57.12.90 impedance and load-loss temperature correction (from memory)',
   args: [
@@ -99,7 +95,6 @@ export const ZCORR = each({
 
 export const IPEAK = each({
   name: 'IPEAK',
-  group: GROUP,
   help: 'Asymmetrical peak short-circuit current at the secondary terminals: ISC × k√2, the IEC 60076-5 peak factor of the combined X/R (1.8√2 above X/R 14). Leave source_mva blank for an infinite source; a source without X/R is taken as pure reactance (the larger peak). Planning estimate: to be verified by a qualified engineer.',
   source: 'IEC 60076-5 peak factor k√2 (table values from memory), computed as the exact first peak of an R-L circuit switched onto a sine; checked against the IEC 60909 κ approximation',
   args: [
@@ -117,7 +112,6 @@ export const IPEAK = each({
 
 export const SCTEMP = each({
   name: 'SCTEMP',
-  group: GROUP,
   help: 'Average winding temperature after a short circuit (IEC 60076-5 thermal withstand): θ0 + 2(θ0 + 235)/(106000/(J²t) − 1) for copper, 225 and 45700 for aluminium. The limit for oil-immersed units is 250 °C (Cu) or 200 °C (Al); output "limit" returns it. Planning estimate: to be verified by a qualified engineer.',
   source: 'IEC 60076-5 thermal ability to withstand short circuit, θ1 formula and limits (from memory; copper formula and the 250/200 °C limits as quoted by secondary sources)',
   args: [

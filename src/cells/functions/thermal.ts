@@ -12,7 +12,7 @@ import {
   topOilProfile,
 } from '../../core/thermal';
 import { cooling as sharedCooling, load as sharedLoad, paper as sharedPaper, thermalMethod, withSample } from '../arguments';
-import { block, each, num } from '../declaration';
+import { inGroup, num } from '../declaration';
 import {
   ambient,
   BEYOND_NAMEPLATE,
@@ -35,6 +35,8 @@ import {
 } from './thermalArguments';
 import type { Paper, ThermalMethod } from '../../core/thermal';
 
+const { block, each } = inGroup(GROUP);
+
 const hotspot = num('hotspot_c', '°C', 'Winding hot-spot temperature, -60 to 250 °C.', 120);
 const load = withSample(sharedLoad, 1);
 const loadBefore = num('load_before', 'per unit', 'Load the unit has carried long enough to settle, before the step (kVA ÷ nameplate kVA).', 0.6);
@@ -45,7 +47,6 @@ const model = (...[c, top, gradient, ratio, m]: Model) => modelOf(c, m, { topOil
 
 export const HOTSPOT = each({
   name: 'HOTSPOT',
-  group: GROUP,
   help: 'Steady-state winding hot-spot temperature at a constant load: ambient + top-oil rise × [(load² × R + 1)/(R + 1)]^n + hot-spot gradient × load^(2m).',
   source: SOURCE,
   args: [load, ambient, ...thermalArgs],
@@ -55,7 +56,6 @@ export const HOTSPOT = each({
 
 export const TOPOIL = each({
   name: 'TOPOIL',
-  group: GROUP,
   help: 'Steady-state top-oil temperature at a constant load: ambient + top-oil rise × [(load² × R + 1)/(R + 1)]^n. With the hot-spot gradient × load^(2m) it makes XFMR.HOTSPOT.',
   source: SOURCE,
   args: [load, ambient, cooling, topOilRise, lossRatio, method],
@@ -78,7 +78,6 @@ type StepModel = Parameters<typeof stepModel>;
 
 export const HOTSPOTSTEP = each({
   name: 'HOTSPOTSTEP',
-  group: GROUP,
   help: `Hot-spot temperature \`hours\` after the load steps from load_before (settled) to load_after at a constant ambient: the step-load check of the loading guides (IEEE C57.91 clause 7 exponentials with its top-oil time constant for n ≠ 1; the IEC 60076-7 equations for the IEC methods). ${BEYOND_NAMEPLATE}`,
   source: `${SOURCE}; IEEE C57.91 clause 7 top-oil time constant (from memory)`,
   args: [loadBefore, loadAfter, num('hours', 'h', 'Time since the step, 0 or more.', 4), ambient, ...stepArgs],
@@ -88,7 +87,6 @@ export const HOTSPOTSTEP = each({
 
 export const OVERLOADTIME = each({
   name: 'OVERLOADTIME',
-  group: GROUP,
   help: `Hours after a step from load_before (settled) to load_after until the hot-spot first reaches limit_c; 0 when it is there from the start; #NUM! with the temperature it settles at when it never gets there. A root search on the closed-form step response: 60 to 75 evaluations for a crossing within a day, at most about 110. ${BEYOND_NAMEPLATE}`,
   source: `${SOURCE}; IEEE C57.91 clause 7 top-oil time constant (from memory)`,
   args: [
@@ -104,7 +102,6 @@ export const OVERLOADTIME = each({
 
 export const FAA = each({
   name: 'FAA',
-  group: GROUP,
   help: 'Aging acceleration factor of thermally upgraded paper: exp(15000/383 − 15000/(hotspot_c + 273)); 1 at 110 °C, about 2 for every 6 to 7 K above.',
   source: 'IEEE C57.91 clause 5 (from memory)',
   args: [hotspot],
@@ -114,7 +111,6 @@ export const FAA = each({
 
 export const AGERATE = each({
   name: 'AGERATE',
-  group: GROUP,
   help: 'Relative aging rate of the insulation paper: for "upgraded" paper the aging acceleration factor (1 at 110 °C); for "normal" kraft paper 2^((hotspot_c − 98)/6) (1 at 98 °C, doubling every 6 K).',
   source: 'IEC 60076-7 relative aging rate; IEEE C57.91 clause 5 (from memory)',
   args: [hotspot, sharedPaper],
@@ -128,8 +124,7 @@ type Profile = [loads: Float64Array, ambients: Float64Array, hours: number, ...m
 const temperatureProfile = (name: string, help: string, column: string, profile: typeof hotSpotProfile) =>
   block({
     name,
-    group: GROUP,
-    help,
+      help,
     source: SOURCE,
     args: profileArgs,
     result: { type: 'number', unit: '°C', columns: [column] },
@@ -157,8 +152,7 @@ export const TOPOILS = temperatureProfile(
 const agingOverProfile = (name: string, help: string, clause5: string, resultUnit: string, f: typeof equivalentAging) =>
   each({
     name,
-    group: GROUP,
-    help,
+      help,
     source: `${SOURCE}; IEEE C57.91 clause 5 ${clause5} (from memory)`,
     args: [...profileArgs, paper],
     result: { type: 'number', unit: resultUnit },
@@ -186,7 +180,6 @@ export const LIFEUSED = agingOverProfile(
 
 export const MAXLOAD = each({
   name: 'MAXLOAD',
-  group: GROUP,
   help: 'Largest constant per-unit load whose steady hot-spot reaches limit_c at this ambient (the root of the HOTSPOT equation). #NUM! when even no load reaches the limit.',
   source: SOURCE,
   args: [
@@ -202,7 +195,6 @@ const opt = (name: string, unit: string, help: string, sample: number) => num(na
 
 export const HEATRUN = block({
   name: 'HEATRUN',
-  group: GROUP,
   help: "Spills a unit's thermal data as a labelled block of 14 rows — method, cooling, rated rises, loss ratio, time constants, exponents, k11 k21 k22, paper and normal life — with the table row's value wherever an argument is blank. Type a unit's heat-run report once here; give the block in place of the cooling name to every other thermal function.",
   source: `${SOURCE}; the unit's own data where given`,
   args: [
