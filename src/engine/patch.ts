@@ -82,6 +82,19 @@ interface Edit {
   readonly seq: number;
 }
 
+/** Where `value` stands among the first `length` numbers of an ascending column (binary search). */
+function indexOfAscending(column: Int32Array, length: number, value: number): number | undefined {
+  let lo = 0;
+  let hi = length - 1;
+  while (lo <= hi) {
+    const mid = (lo + hi) >> 1;
+    if (column[mid] === value) return mid;
+    if (column[mid]! < value) lo = mid + 1;
+    else hi = mid - 1;
+  }
+  return undefined;
+}
+
 /** Cells by row and column, found in the sheet's index of `<c>` elements. */
 class CellIndex {
   private byRow?: Map<number, [number, number]>;
@@ -122,16 +135,7 @@ class CellIndex {
 
   /** The index of the `<row>` element of that number. */
   rowTag(row: number): number | undefined {
-    const nums = this.sheet.rowTags.cols[0]!;
-    let lo = 0;
-    let hi = this.sheet.rowTags.length - 1;
-    while (lo <= hi) {
-      const mid = (lo + hi) >> 1;
-      if (nums[mid] === row) return mid;
-      if (nums[mid]! < row) lo = mid + 1;
-      else hi = mid - 1;
-    }
-    return undefined;
+    return indexOfAscending(this.sheet.rowTags.cols[0]!, this.sheet.rowTags.length, row);
   }
 
   /** Where a new `<row>` of that number goes: before the first row below it, or at the end of sheetData. */
@@ -182,17 +186,7 @@ function formulaCellXml(res: CellResult, old: string, fOld: string, options: { v
 }
 
 /** Is `at` the start of one of the formula cells (their starts ascending)? */
-function isFormulaStart(starts: Int32Array, at: number): boolean {
-  let lo = 0;
-  let hi = starts.length - 1;
-  while (lo <= hi) {
-    const mid = (lo + hi) >> 1;
-    if (starts[mid] === at) return true;
-    if (starts[mid]! < at) lo = mid + 1;
-    else hi = mid - 1;
-  }
-  return false;
-}
+const isFormulaStart = (starts: Int32Array, at: number): boolean => indexOfAscending(starts, starts.length, at) !== undefined;
 
 /**
  * The edits of a sheet other than its formula cells — cells of spilled results, cleared cells of
