@@ -7,7 +7,6 @@ import { Command, CommanderError } from 'commander';
 import packageJson from '../../package.json';
 import { SAFETY_NOTE } from '../cells/metadata';
 import { calc, type CalcSummary } from './calc';
-import { demo, formatDemoSummary } from './demo';
 import { installSignalHandlers, UsageError } from './files';
 import { restoreTerminal } from './progress';
 
@@ -86,6 +85,8 @@ function program(): Command {
     .option('--out <dir>', 'folder to write the workbooks into (made if missing)', 'fluxbook-demo')
     .option('--overwrite', 'replace demo workbooks already in the folder')
     .action(async (opts: { out: string; overwrite?: boolean }) => {
+      // Loaded here: the demo's workbook writer is not needed by calc, which starts faster without it.
+      const { demo, formatDemoSummary } = await import('./demo');
       process.stdout.write(`${formatDemoSummary(await demo(opts))}\n`);
     });
   return p;

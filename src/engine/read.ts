@@ -10,6 +10,7 @@
  */
 import type { RawCellContent } from 'hyperformula';
 import { SaxesParser, type SaxesTag } from 'saxes';
+import { decodeText, parseLocated, tagEnd } from './located';
 import { callsOurFunctions, toEngineFormula, toStoredFormula } from './names';
 import { shiftFormula, simpleCall, type SimpleCall } from './formulas';
 import { WorkbookError } from './package';
@@ -20,7 +21,10 @@ export const REL_NS = 'http://schemas.openxmlformats.org/officeDocument/2006/rel
 export const SHEET_METADATA_REL = `${REL_NS}/sheetMetadata`;
 export const SHEET_METADATA_TYPE = 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheetMetadata+xml';
 
-const local = (name: string): string => name.slice(name.indexOf(':') + 1);
+const local = (name: string): string => {
+  const colon = name.indexOf(':');
+  return colon < 0 ? name : name.slice(colon + 1);
+};
 
 /**
  * One formula cell as the file stores it. Its texts come from its template (a filled-down column
@@ -403,6 +407,12 @@ export function fitsTemplate(stored: string, source: string, digits: string): bo
   return k === stored.length;
 }
 
+/** Attribute values with their references decoded. */
+function decodedAttributes(a: Record<string, string>): Record<string, string> {
+  for (const k in a) if (a[k]!.indexOf('&') >= 0) a[k] = decodeText(a[k]!);
+  return a;
+}
+
 interface SharedMaster {
   readonly row: number;
   readonly col: number;
@@ -419,7 +429,6 @@ export function readSheet(
   /** Keep the values formula cells hold from the last calculation in `rows` too (to read a result file). */
   cachedValues = false,
 ): SheetRead {
-  const parser = new SaxesParser({ position: true });
   const rows: RawCellContent[][] = [];
   const formulas: FormulaCell[] = [];
   const cells = new IntColumns(4);
@@ -451,21 +460,18 @@ export function readSheet(
   let inIs = false;
   let phonetic = 0;
 
-  const startOf = (): number => text.lastIndexOf('<', parser.position - 1);
   const inOldRange = (r: number, c: number): boolean => {
     for (const g of oldRanges) if (r >= g.top && r <= g.bottom && c >= g.left && c <= g.right) return true;
     return false;
   };
 
-  parser.on('opentag', (t: SaxesTag) => {
-    const name = local(t.name);
-    const a = t.attributes as Record<string, string>;
+  const open = (name: string, attrs: () => Record<string, string>, selfClosing: boolean, start: number): void => {
     if (inCell) {
       if (name === 'f') {
-        fAttrs = a;
+        fAttrs = decodedAttributes(attrs());
         fText = '';
-        fStart = startOf();
-        fEnd = t.isSelfClosing ? parser.position : -1;
+        fStart = start;
+        fEnd = selfClosing ? tagEnd(text, start) : -1;
         where = 'f';
       } else if (name === 'v') {
         vText = '';
@@ -479,7 +485,8 @@ export function readSheet(
     }
     if (name === 'c') {
       inCell = true;
-      cStart = startOf();
+      cStart = start;
+      const a = decodedAttributes(attrs());
       const ref = a.r !== undefined ? parseCellRef(a.r) : undefined;
       col = ref ? ref.col : col + 1;
       if (ref && ref.row !== rowNum) rowNum = ref.row;
@@ -489,45 +496,42 @@ export function readSheet(
       vText = undefined;
       isText = undefined;
       where = '';
-      if (t.isSelfClosing) finishCell(parser.position);
+      if (selfClosing) finishCell(tagEnd(text, start));
     } else if (name === 'row') {
-      rowNum = a.r !== undefined ? Number(a.r) : rowNum + 1;
+      const r = decodedAttributes(attrs()).r;
+      rowNum = r !== undefined ? Number(r) : rowNum + 1;
       col = 0;
-      rowStart = startOf();
-      rowOpenEnd = parser.position;
-      if (t.isSelfClosing) rowTags.push(rowNum, rowStart, rowOpenEnd, -1, rowOpenEnd); // -1: <row/> has no content
+      rowStart = start;
+      rowOpenEnd = tagEnd(text, start);
+      if (selfClosing) rowTags.push(rowNum, rowStart, rowOpenEnd, -1, rowOpenEnd); // -1: <row/> has no content
     } else if (name === 'sheetData') {
-      const start = startOf();
-      sheetData = { start, openEnd: parser.position, closeStart: parser.position, end: parser.position, empty: t.isSelfClosing };
+      const end = tagEnd(text, start);
+      sheetData = { start, openEnd: end, closeStart: end, end, empty: selfClosing };
     }
-  });
+  };
 
-  parser.on('text', (s: string) => {
+  const onText = (s: string): void => {
     if (!inCell) return;
     if (where === 'f') fText += s;
     else if (where === 'v') vText += s;
     else if (where === 't' && phonetic === 0) isText += s;
-  });
+  };
 
-  parser.on('closetag', (t: SaxesTag) => {
-    const name = local(t.name);
+  const close = (name: string, selfClosing: boolean, start: number, end: number): void => {
+    if (selfClosing) return; // done when it opened
     if (inCell) {
-      if (name === 'c') finishCell(parser.position);
+      if (name === 'c') finishCell(end);
       else if (name === 'f') {
-        fEnd = parser.position;
+        fEnd = end;
         where = '';
       } else if (name === 'v' || name === 't') where = '';
       else if (name === 'rPh') phonetic--;
       else if (name === 'is') inIs = false;
       return;
     }
-    if (name === 'row') {
-      const end = parser.position;
-      rowTags.push(rowNum, rowStart, rowOpenEnd, text.lastIndexOf('<', end - 1), end);
-    } else if (name === 'sheetData' && !sheetData.empty) {
-      sheetData = { ...sheetData, closeStart: text.lastIndexOf('<', parser.position - 1), end: parser.position };
-    }
-  });
+    if (name === 'row') rowTags.push(rowNum, rowStart, rowOpenEnd, start, end);
+    else if (name === 'sheetData' && !sheetData.empty) sheetData = { ...sheetData, closeStart: start, end };
+  };
 
   function finishCell(end: number): void {
     inCell = false;
@@ -558,13 +562,8 @@ export function readSheet(
     if (value !== null) (rows[rowNum - 1] ??= [])[col - 1] = value;
   }
 
-  const CHUNK = 1 << 20;
   try {
-    for (let i = 0; i < text.length; i += CHUNK) {
-      parser.write(text.slice(i, i + CHUNK));
-      onProgress?.(Math.min(CHUNK, text.length - i));
-    }
-    parser.close();
+    parseLocated(text, { open: (n, a, sc, at) => open(local(n), a, sc, at), close: (n, sc, at, end) => close(local(n), sc, at, end), text: onText }, onProgress);
   } catch (error) {
     if (error instanceof WorkbookError) throw error;
     throw new WorkbookError(`this .xlsx package cannot be read: part ${meta.path} is not well-formed XML (${(error instanceof Error ? error.message : String(error)).split('\n')[0]})`);
