@@ -4,7 +4,7 @@
  * .ci/run).
  */
 import { execFileSync, spawnSync } from 'node:child_process';
-import { existsSync, mkdtempSync, readFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
@@ -35,7 +35,8 @@ import { withinTolerance, type TestItem } from '../../src/core/testReport';
 import { loadLossWorth, noLoadLossWorth, totalOwningCost } from '../../src/core/cost';
 import { doeMinimumEfficiency, meetsEfficiencyRule } from '../../src/core/efficiencyRules';
 import { cyclicMax, hotSpotAfterStep, loadingYear, maxSteadyLoad, overloadTime, profileCheck, steadyHotSpot, thermalModel } from '../../src/core/thermal';
-import { calculateWorkbook, type FormulaResult } from '../../src/engine/xlsx';
+import { parseCellRef } from '../../src/engine/read';
+import { calculateWorkbook, type FormulaResult, type JsonValue } from '../../src/engine/xlsx';
 import { xfmr } from '../support/cells';
 
 const recalculated = async (bytes: Buffer): Promise<FormulaResult[]> => (await calculateWorkbook(bytes)).results;
@@ -301,6 +302,11 @@ function csvRows(text: string): string[][] {
   return rows;
 }
 
+/** The error codes a cell of a file can hold (ECMA-376 Part 1 §18.18.80); others are stored as #VALUE!. */
+const FILE_ERROR_CODES = new Set(['#NULL!', '#DIV/0!', '#VALUE!', '#REF!', '#NAME?', '#NUM!', '#N/A']);
+
+const cellAt = (a1: string) => parseCellRef(a1)!;
+
 /** A number as LibreOffice writes it with "save cell contents as shown" off: full precision, percent kept. */
 function csvNumber(s: string): number {
   return s.endsWith('%') ? Number(s.slice(0, -1)) / 100 : Number(s);
@@ -359,6 +365,48 @@ describe.runIf(hasSoffice || process.env.CI)('the demo workbooks in LibreOffice'
     expect(csvNumber(byLabel['Peak hot-spot of the year (°C)']!)).toBeCloseTo(summary.year.peakHotSpotC, 10);
     expect(csvNumber(byLabel['Equivalent aging factor F_EQA']!)).toBeCloseTo(summary.year.equivalentAging, 14);
     expect(csvNumber(byLabel['Life used in the year (h of normal aging)']!)).toBeCloseTo(summary.year.lifeUsedHours, 10);
+  });
+
+  it('shows every value of a --values copy, TRUE/FALSE, text, errors and every cell of each spill included', async () => {
+    let checked = 0;
+    let spilled = 0;
+    let logical = 0;
+    for (const file of summary.files) {
+      const calculated = await calculateWorkbook(readFileSync(file), { values: true });
+      const copy = join(dir, `values-${file.split('/').pop()}`);
+      writeFileSync(copy, calculated.bytes);
+      const sheets = toCsv(copy);
+      /** The field LibreOffice shows at an A1 address of a sheet. */
+      const shown = (sheet: string, row: number, col: number): string => sheets[sheet]?.[row - 1]?.[col - 1] ?? '';
+      const expectShown = (sheet: string, row: number, col: number, v: JsonValue, where: string) => {
+        const field = shown(sheet, row, col);
+        checked++;
+        if (typeof v === 'number') expect(Math.abs(csvNumber(field) - v), `${where}: ${field} vs ${v}`).toBeLessThanOrEqual(Math.abs(v) * 1e-13);
+        else if (typeof v === 'boolean') {
+          expect(field, where).toBe(v ? 'TRUE' : 'FALSE');
+          logical++;
+        } else if (typeof v === 'string') expect(field, where).toBe(v);
+        else if (v === null) expect(['', '0'], where).toContain(field);
+        else {
+          const code = FILE_ERROR_CODES.has(v.error) ? v.error : '#VALUE!';
+          expect(field, where).toBe(code);
+        }
+      };
+      for (const r of calculated.results) {
+        const { row, col } = cellAt(r.cell);
+        if (!r.spill) {
+          expectShown(r.sheet, row, col, r.value === null ? 0 : r.value, `${r.sheet}!${r.cell}`);
+          continue;
+        }
+        r.spill.values.forEach((values, i) => values.forEach((v, j) => expectShown(r.sheet, row + i, col + j, v, `${r.sheet}!${r.cell} spill [${i}][${j}]`)));
+        spilled++;
+      }
+      for (const [name, rows] of Object.entries(sheets)) expect(rows.flat().filter((f) => f === '#NAME?'), `${name} shows #NAME?`).toEqual([]);
+    }
+    // The demo has spilled profiles and logical answers (LOADOK, compliance): the check saw them.
+    expect(spilled).toBeGreaterThan(0);
+    expect(logical).toBeGreaterThan(0);
+    expect(checked).toBeGreaterThan(HOURS); // a year's spilled profile at least
   });
 
   it('shows each offer’s total owning cost and the recommended offer Fluxbook computed', () => {
