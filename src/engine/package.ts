@@ -10,9 +10,9 @@
  *  - the memory that reading, recalculating and writing the worksheets takes is estimated from
  *    their declared sizes (WORKBOOK_MEMORY); a workbook that would need more than Node.js may use
  *    is refused before it is parsed.
- * While a part is unpacked later, yauzl stops it the moment it yields more bytes than its
- * directory entry declares (a "ZIP bomb" that lies about its size); zipError turns that into our
- * message.
+ * While a part is unpacked later, zlib stops at the size its directory entry declares (a "ZIP
+ * bomb" that lies about its size), and a part shorter than declared or with another CRC-32 is
+ * refused as damaged; zipError turns each into our message.
  */
 import { getHeapStatistics } from 'node:v8';
 import type { ZipEntry } from './zip';
@@ -29,8 +29,8 @@ export const MAX_PART_BYTES = 500 * MiB;
 /**
  * Memory of `fluxbook calc` per byte of worksheet XML, measured on the development machine
  * (Node 20, HyperFormula 3.5.0, peak resident memory with GNU time): a 100,000-unit fleet of 9
- * values and 4 filled-down XFMR formulas a row (60 MB of sheet XML) peaks at 0.8 to 1.0 GB, about
- * 15 bytes a byte; a 1,000,000-row load column with one XFMR formula a row and one over the whole
+ * values and 4 filled-down XFMR formulas a row (60 MB of sheet XML) peaks at 0.5 to 0.6 GB, about
+ * 9 bytes a byte; a 1,000,000-row load column with one XFMR formula a row and one over the whole
  * column (55 MB), which goes through HyperFormula, at 2.9 GB, about 50 a byte, of which the heap
  * Node's limit counts is a part. 24 a byte lets both run with the default heap and refuses what
  * would exhaust a small one.

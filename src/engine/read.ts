@@ -182,16 +182,11 @@ export function columnLetters(col: number): string {
 
 export const a1 = (row: number, col: number): string => `${columnLetters(col)}${row}`;
 
-/** A part's text, decoded chunk by chunk as it is unpacked (a byte-order mark kept). */
+/** A part's text (a byte-order mark kept). */
 async function partText(zip: ZipReader, entry: ZipEntry, onBytes?: (n: number) => void): Promise<string> {
-  const utf8 = new TextDecoder('utf-8', { ignoreBOM: true });
-  const pieces: string[] = [];
-  await zip.stream(entry, (c) => {
-    pieces.push(utf8.decode(c, { stream: true }));
-    onBytes?.(c.length);
-  });
-  pieces.push(utf8.decode());
-  return pieces.join('');
+  const bytes = await zip.unpack(entry);
+  onBytes?.(bytes.length);
+  return new TextDecoder('utf-8', { ignoreBOM: true }).decode(bytes);
 }
 
 type Handlers = {

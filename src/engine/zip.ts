@@ -2,15 +2,15 @@
  * The ZIP container of an .xlsx package (ECMA-376 Part 2, Open Packaging Conventions, which uses
  * the PKWARE .ZIP format): read with yauzl, written with fflate.
  *
- *  - yauzl reads the central directory and each entry's raw (still compressed) bytes, and while it
- *    unpacks an entry it stops with an error once the entry yields more bytes than its directory
- *    entry declares, so a part that lies about its size never fills memory.
+ *  - yauzl reads the central directory and each entry's raw (still compressed) bytes; zlib unpacks
+ *    an entry into at most the size its directory entry declares and the size and CRC-32 are
+ *    checked, so a part that lies about its size never fills memory.
  *  - fflate writes the new package. A part that is not changed goes in as the very bytes it had,
  *    still compressed, with the CRC-32 and sizes from the old directory (fflate's ZipInputFile
  *    takes already compressed data); a changed part is deflated with Node's zlib.
  */
 import { once } from 'node:events';
-import { crc32, createDeflateRaw, deflateRawSync } from 'node:zlib';
+import { crc32, createDeflateRaw, deflateRawSync, inflateRawSync } from 'node:zlib';
 import { Zip, type ZipInputFile } from 'fflate';
 import yauzl from 'yauzl';
 import { zipError } from './package';
@@ -32,8 +32,12 @@ export interface ZipReader {
   readonly entries: readonly ZipEntry[];
   /** The raw bytes of an entry, as stored in the package (compressed). */
   raw(entry: ZipEntry): Promise<Buffer>;
-  /** Unpacks an entry chunk by chunk; yauzl fails once it yields more than it declares. */
-  stream(entry: ZipEntry, onChunk: (chunk: Buffer) => void): Promise<void>;
+  /**
+   * Unpacks an entry at once, into no more than the size its directory entry declares, and checks
+   * its size and CRC-32: in one call zlib unpacks a large sheet in about a third of the time the
+   * stream takes.
+   */
+  unpack(entry: ZipEntry): Promise<Buffer>;
   close(): void;
 }
 
@@ -77,25 +81,34 @@ export async function openZip(bytes: Buffer): Promise<ZipReader> {
     zip.on('error', (error) => reject(zipError(error)));
     zip.readEntry();
   });
-  const open = (entry: ZipEntry, decompress: boolean) =>
-    zip.openReadStreamPromise(entry.entry, entry.method === 0 ? {} : { decompress }) as Promise<NodeJS.ReadableStream>;
+  const open = (entry: ZipEntry) => zip.openReadStreamPromise(entry.entry, entry.method === 0 ? {} : { decompress: false }) as Promise<NodeJS.ReadableStream>;
+  const raw = async (entry: ZipEntry): Promise<Buffer> => {
+    const chunks: Buffer[] = [];
+    try {
+      await collect(await open(entry), (c) => chunks.push(c));
+    } catch (error) {
+      throw zipError(error, entry.name);
+    }
+    return Buffer.concat(chunks);
+  };
   return {
     entries,
-    async raw(entry) {
-      const chunks: Buffer[] = [];
-      try {
-        await collect(await open(entry, false), (c) => chunks.push(c));
-      } catch (error) {
-        throw zipError(error, entry.name);
-      }
-      return Buffer.concat(chunks);
-    },
-    async stream(entry, onChunk) {
-      try {
-        await collect(await open(entry, true), onChunk);
-      } catch (error) {
-        throw zipError(error, entry.name);
-      }
+    raw,
+    async unpack(entry) {
+      const stored = await raw(entry);
+      let data: Buffer;
+      if (entry.method === 0) data = stored;
+      else if (entry.method === 8) {
+        try {
+          data = inflateRawSync(stored, { maxOutputLength: Math.max(1, entry.size) });
+        } catch (error) {
+          const tooLarge = (error as { code?: string }).code === 'ERR_BUFFER_TOO_LARGE';
+          throw zipError(tooLarge ? new Error(`too many bytes in the stream. expected ${entry.size}`) : error, entry.name);
+        }
+      } else throw zipError(new Error(`compression method ${entry.method} is not supported`), entry.name);
+      if (data.length !== entry.size) throw zipError(new Error(`it unpacks to ${data.length} bytes, not the ${entry.size} its ZIP directory entry declares`), entry.name);
+      if (crc32(data) >>> 0 !== entry.crc >>> 0) throw zipError(new Error('its CRC-32 does not match its ZIP directory entry (a damaged file)'), entry.name);
+      return data;
     },
     close: () => zip.close(),
   };
