@@ -407,7 +407,8 @@ export async function patchPackage(
     if (!list || list.length === 0) continue;
     // Formula cells in the order they stand in the part (as read, unless a caller mixed them).
     const ordered = list.every((c, k) => k === 0 || list[k - 1]!.cell.start < c.cell.start) ? list : [...list].sort((a, b) => a.cell.start - b.cell.start);
-    const starts = Int32Array.from(ordered, (c) => c.cell.start);
+    const starts = new Int32Array(ordered.length);
+    for (let k = 0; k < ordered.length; k++) starts[k] = ordered[k]!.cell.start;
     const other = otherEdits(sheet, ordered, starts, options);
     const state = { changed: false };
     const sheetOptions = { values: options.values, cm };
