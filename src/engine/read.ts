@@ -1,12 +1,13 @@
 /**
- * Reads what the engine needs from an .xlsx package, with saxes (a streaming, well-formedness
- * checking XML parser): the sheet order and names, defined names, shared strings, the
- * dynamic-array cell metadata, and for every worksheet its values, its formulas (shared formulas
- * expanded, ECMA-376 Part 1 §18.3.1.40 `f`) and where each `<row>` and `<c>` element sits in the
- * part's text, so the writer can replace single cells and copy everything else as it was.
+ * Reads what the engine needs from an .xlsx package: the sheet order and names, defined names,
+ * shared strings and the dynamic-array cell metadata (small parts, parsed with saxes, a strict
+ * well-formedness checking XML parser), and for every worksheet its values, its formulas (shared
+ * formulas expanded, ECMA-376 Part 1 §18.3.1.40 `f`) and where each `<row>` and `<c>` element
+ * sits in the part's text (parsed with saxen through located.ts, which takes each tag's position
+ * from the text), so the writer can replace single cells and copy everything else as it was.
  *
- * A part's text is its UTF-8 decoded as is (a byte-order mark kept): the positions saxes reports
- * are indexes into that string, and encoding the untouched stretches again gives their bytes back.
+ * A part's text is its UTF-8 decoded as is (a byte-order mark kept): the positions are indexes
+ * into that string, and encoding the untouched stretches again gives their bytes back.
  */
 import type { RawCellContent } from 'hyperformula';
 import { SaxesParser, type SaxesTag } from 'saxes';
