@@ -50,8 +50,8 @@ const PROGRESS_EVERY = 1 << 16;
 /**
  * Parses `text` (a byte-order mark at its start is passed over), calling `h` in document order;
  * `onChars` hears how much was parsed. The text is parsed whole: it is in memory already, and
- * saxen's streaming would copy each chunk's unparsed rest again. Throws an Error naming what is wrong when the text is not
- * well-formed.
+ * saxen's streaming would copy each chunk's unparsed rest again. Throws an Error naming what is
+ * wrong when the text is not well-formed.
  */
 export function parseLocated(text: string, h: LocatedHandlers, onChars?: (n: number) => void): void {
   let cursor = 0;

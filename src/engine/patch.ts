@@ -296,9 +296,11 @@ function* patchedText(
   const text = sheet.text;
   let pos = 0;
   let j = 0;
+  // Every edit given here changes the text: other edits are planned only where they do, and a
+  // formula cell's only where its new element differs.
   const emit = function* (at: number, end: number, xml: string) {
     if (at < pos) return; // inside an element already replaced
-    state.changed ||= at === end ? xml !== '' : text.slice(at, end) !== xml;
+    state.changed = true;
     yield text.slice(pos, at);
     yield xml;
     pos = end;
@@ -319,11 +321,7 @@ function* patchedText(
     if (f.start < pos) continue;
     const old = text.slice(f.start, f.end);
     const xml = formulaCellXml(res, old, text.slice(f.fStart, f.fEnd), options);
-    if (xml === old) continue;
-    state.changed = true;
-    yield text.slice(pos, f.start);
-    yield xml;
-    pos = f.end;
+    if (xml !== old) yield* emit(f.start, f.end, xml);
   }
   while (j < other.length) {
     const e = other[j++]!;
@@ -422,7 +420,7 @@ export async function patchPackage(
     const content = replaced.get(e.name);
     const sheet = patched.get(e.name);
     if (content) out.push({ name: e.name, content });
-    else if (sheet) out.push({ name: e.name, pieces: sheet.pieces, changed: () => sheet.state.changed, original: { entry: e, raw: () => zip.raw(e) } });
+    else if (sheet) out.push({ name: e.name, pieces: sheet.pieces, original: { entry: e, raw: () => zip.raw(e), changed: () => sheet.state.changed } });
     else out.push({ name: e.name, copy: e, raw: await zip.raw(e) });
   }
   out.push(...added);

@@ -120,10 +120,14 @@ export type OutEntry =
   | { readonly name: string; readonly content: Uint8Array }
   /**
    * Text in pieces, UTF-8 encoded and deflated as they come: a patched sheet is never joined
-   * whole. `changed` is asked once the pieces are used up: false means the text came out as the
-   * part already was, and the part is copied as it was stored instead.
+   * whole. `original.changed` is asked once the pieces are used up: false means the text came out
+   * as the part already was, and the part is copied as it was stored instead.
    */
-  | { readonly name: string; readonly pieces: Iterable<string>; readonly changed?: () => boolean; readonly original?: { readonly entry: ZipEntry; readonly raw: () => Promise<Buffer> } };
+  | {
+      readonly name: string;
+      readonly pieces: Iterable<string>;
+      readonly original?: { readonly entry: ZipEntry; readonly raw: () => Promise<Buffer>; readonly changed: () => boolean };
+    };
 
 /** A part that goes in already compressed, exactly as it was stored, or compressed here. */
 function compressedFile(name: string, method: number, crc: number, size: number, data: readonly Uint8Array[]): ZipInputFile & { start(): void } {
@@ -183,7 +187,7 @@ export async function writeZip(entries: readonly OutEntry[]): Promise<Buffer> {
     if ('copy' in e) files.push(compressedFile(e.name, e.copy.method, e.copy.crc, e.copy.size, [e.raw]));
     else if ('pieces' in e) {
       const d = await deflatePieces(e.pieces);
-      if (e.original && e.changed?.() === false) {
+      if (e.original?.changed() === false) {
         const { entry, raw } = e.original;
         files.push(compressedFile(e.name, entry.method, entry.crc, entry.size, [await raw()]));
       } else files.push(compressedFile(e.name, 8, d.crc, d.size, d.chunks));
