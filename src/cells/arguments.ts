@@ -22,6 +22,8 @@ export function blankable<T extends string>(arg: Arg<T>): Arg<T | undefined> {
 export const kva = num('kva', 'kVA', 'Nameplate rating.', 1000);
 export const p0 = num('p0_w', 'W', 'No-load (core) loss, from the test report or the offer.', 1400);
 export const pk = num('pk_w', 'W', 'Load loss at rated current, at reference temperature, from the test report or the offer.', 10500);
+/** The two losses of a test report or offer, no-load then load: a function that takes p0_w takes pk_w after it. */
+export const losses = [p0, pk] as const;
 export const phases = num('phases', 'phases', '1 or 3.', 3, { default: 3 });
 export const volts = num('v', 'V', 'Voltage, line-to-line for three-phase.', 480);
 export const impedance = num('z', 'fraction', 'Impedance as a percentage of the rating, e.g. 5.75%.', 0.0575);

@@ -1,5 +1,5 @@
 import { loadLossWorth, lossEnergyCost, noLoadLossWorth, totalOwningCost } from '../../core/cost';
-import { loads, p0, pk, stepHours } from '../arguments';
+import { loads, losses, stepHours } from '../arguments';
 import { inGroup, num } from '../declaration';
 
 const { each } = inGroup('Cost');
@@ -44,8 +44,7 @@ export const TOC = each({
   source: 'total owning cost, TOC = price + A·P0 + B·Pk (common practice)',
   args: [
     num('price', 'money', 'Purchase price of the unit.', 18500),
-    p0,
-    pk,
+    ...losses,
     num('a', 'money/W', 'Worth of a watt of no-load loss (AFACTOR).', 10.5),
     num('b', 'money/W', 'Worth of a watt of rated load loss (BFACTOR).', 2.1),
   ],
@@ -58,8 +57,7 @@ export const LOSSCOST = each({
   help: 'Cost of the energy lost over a loading profile, not discounted: Σ (p0_w + pk_w × load²) × hours / 1000 × price_kwh.',
   source: 'common practice',
   args: [
-    p0,
-    pk,
+    ...losses,
     loads,
     price,
     stepHours,

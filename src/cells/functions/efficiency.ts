@@ -1,5 +1,5 @@
 import { efficiencyAt, efficiencyCurve, maxEfficiency, maxEfficiencyLoad, peakEfficiencyIndex } from '../../core/efficiency';
-import { kva, load, p0, pf, pk } from '../arguments';
+import { kva, load, losses, pf } from '../arguments';
 import { inGroup, num } from '../declaration';
 
 const { block, each } = inGroup('Efficiency');
@@ -8,7 +8,7 @@ export const EFF = each({
   name: 'EFF',
   help: 'Efficiency at a per-unit load and power factor: output / (output + p0_w + pk_w × load²).',
   source: 'η = P_out / (P_out + P0 + x²·Pk) (textbook standard)',
-  args: [kva, p0, pk, load, pf],
+  args: [kva, ...losses, load, pf],
   result: { type: 'number', unit: 'fraction' },
   compute: efficiencyAt,
 });
@@ -17,7 +17,7 @@ export const EFFMAXLOAD = each({
   name: 'EFFMAXLOAD',
   help: 'Per-unit load at which efficiency is highest, where load loss equals no-load loss: √(p0_w / pk_w).',
   source: 'textbook standard',
-  args: [p0, pk],
+  args: [...losses],
   result: { type: 'number', unit: 'per unit' },
   compute: maxEfficiencyLoad,
 });
@@ -26,7 +26,7 @@ export const EFFMAX = each({
   name: 'EFFMAX',
   help: 'The highest efficiency the unit reaches, at load √(p0_w / pk_w).',
   source: 'textbook standard',
-  args: [kva, p0, pk, pf],
+  args: [kva, ...losses, pf],
   result: { type: 'number', unit: 'fraction' },
   compute: maxEfficiency,
 });
@@ -37,8 +37,7 @@ export const EFFCURVE = block({
   source: 'textbook standard',
   args: [
     kva,
-    p0,
-    pk,
+    ...losses,
     pf,
     num('points', 'rows', 'Number of rows, 2 to 1001.', 11, { default: 11 }),
     num('max_load', 'per unit', 'Highest load of the curve.', 1.25, { default: 1.25 }),
@@ -51,7 +50,7 @@ export const PEI = each({
   name: 'PEI',
   help: 'Peak efficiency index: 1 − 2(P0 + Pc0) / (Sr·√((P0 + Pc0)/Pk)), with Pc0 the cooling power at no load.',
   source: 'EU Regulation 548/2014 Annex I (from memory)',
-  args: [kva, p0, pk, num('pc0_w', 'W', 'Power the cooling draws at no load; 0 for ONAN.', 0, { default: 0 })],
+  args: [kva, ...losses, num('pc0_w', 'W', 'Power the cooling draws at no load; 0 for ONAN.', 0, { default: 0 })],
   result: { type: 'number', unit: 'fraction' },
   compute: peakEfficiencyIndex,
 });

@@ -1,5 +1,5 @@
 import { allDayEfficiency, energyDelivered, energyLost, loadFactor, lossFactor, lossFactorEstimate } from '../../core/energy';
-import { kva, loads, p0, pk, stepHours as hours } from '../arguments';
+import { kva, loads, losses, stepHours as hours } from '../arguments';
 import { inGroup, num, series } from '../declaration';
 
 const { each } = inGroup('All-day energy');
@@ -9,7 +9,7 @@ export const ALLDAY = each({
   name: 'ALLDAY',
   help: 'All-day (energy) efficiency over a loading profile: kWh out / (kWh out + kWh lost).',
   source: 'all-day efficiency (textbook standard)',
-  args: [kva, p0, pk, loads, pfs, hours],
+  args: [kva, ...losses, loads, pfs, hours],
   result: { type: 'number', unit: 'fraction' },
   compute: allDayEfficiency,
 });
@@ -18,7 +18,7 @@ export const ELOSS = each({
   name: 'ELOSS',
   help: 'Energy lost in the unit over a loading profile: Σ (p0_w + pk_w × load²) × hours / 1000.',
   source: 'common practice',
-  args: [p0, pk, loads, hours],
+  args: [...losses, loads, hours],
   result: { type: 'number', unit: 'kWh' },
   compute: energyLost,
 });

@@ -1,5 +1,5 @@
 import { loadLossAt, loadLossAtTemperature, totalLossesAt } from '../../core/losses';
-import { load, lossStandard, material, p0, pk } from '../arguments';
+import { load, losses, lossStandard, material, pk } from '../arguments';
 import { inGroup, num } from '../declaration';
 
 const { each } = inGroup('Losses');
@@ -17,7 +17,7 @@ export const LOSSES = each({
   name: 'LOSSES',
   help: 'Total losses at a per-unit load: no-load loss + load loss × load².',
   source: 'common practice',
-  args: [p0, pk, load],
+  args: [...losses, load],
   result: { type: 'number', unit: 'W' },
   compute: totalLossesAt,
 });
