@@ -80,3 +80,5 @@ export const lossStandard = choice('standard', '"IEEE" (copper Tk 234.5) or "IEC
   options: ['IEEE', 'IEC'] as const satisfies readonly LossStandard[],
   default: 'IEEE',
 });
+/** Conductor and standard, which together fix the temperature constant Tk of a correction to another temperature. */
+export const temperatureConstant = [material, lossStandard] as const;

@@ -1,5 +1,5 @@
 import { loadLossAt, loadLossAtTemperature, totalLossesAt } from '../../core/losses';
-import { load, losses, lossStandard, material, pk } from '../arguments';
+import { load, losses, pk, temperatureConstant } from '../arguments';
 import { inGroup, num } from '../declaration';
 
 const { each } = inGroup('Losses');
@@ -37,8 +37,7 @@ export const LOSSTEMP = each({
     num('i2r_w', 'W', 'The I²R part of pk_w at from_c (measured resistance × current²); needed when to_c is below from_c, blank otherwise treats all of pk_w as I²R.', 9000, {
       optional: true,
     }),
-    material,
-    lossStandard,
+    ...temperatureConstant,
   ],
   result: { type: 'number', unit: 'W' },
   compute: loadLossAtTemperature,

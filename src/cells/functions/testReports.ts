@@ -1,7 +1,7 @@
 import { impedanceAtTemperature, resistanceAtTemperature } from '../../core/losses';
 import { peakShortCircuitCurrent, SHORT_CIRCUIT_LIMIT_C, shortCircuitTemperature } from '../../core/shortCircuit';
 import { TEST_ITEM_ALIASES, TEST_ITEMS, toleranceLimit, withinTolerance, type TestStandard, type WindingArrangement } from '../../core/testReport';
-import { impedance, kva, lossStandard, material, phases, sourceMva, volts, withSample } from '../arguments';
+import { impedance, kva, material, phases, sourceMva, temperatureConstant, volts, withSample } from '../arguments';
 import { choice, inGroup, num } from '../declaration';
 
 const { each } = inGroup('Test reports and short circuit');
@@ -66,8 +66,7 @@ export const RCORR = each({
     num('r_ohm', 'Ω', 'Measured winding resistance.', 0.412),
     num('from_c', '°C', 'Winding temperature at the measurement (often the oil or ambient temperature of a cold unit).', 22),
     num('to_c', '°C', 'Temperature wanted, e.g. 75 or 85.', 75),
-    material,
-    lossStandard,
+    ...temperatureConstant,
   ],
   result: { type: 'number', unit: 'Ω' },
   compute: resistanceAtTemperature,
@@ -86,8 +85,7 @@ export const ZCORR = each({
     num('i2r_w', 'W', 'The I²R part of pk_w at from_c; blank takes all of pk_w as I²R (allowed only when correcting hotter).', 8600, {
       optional: true,
     }),
-    material,
-    lossStandard,
+    ...temperatureConstant,
   ],
   result: { type: 'number', unit: 'fraction' },
   compute: impedanceAtTemperature,
