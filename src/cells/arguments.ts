@@ -69,6 +69,8 @@ export const doeLevels = num('levels', 'year', 'DOE levels: 2016 for units made 
   default: 2016,
 });
 export const bil = num('bil_kv', 'kV', 'Basic impulse level of the high-voltage winding; needed for "mvdry" only.', 95, { optional: true });
+/** What picks the DOE table a unit falls in, in the order DOEMIN and COMPLIES take it after kva. */
+export const doeTable = [doeKind, phases, doeLevels, bil] as const;
 
 // Winding conductor and the standard whose temperature constant applies (losses, test reports).
 export const material = choice('material', 'Winding conductor: "Cu" or "Al".', {

@@ -1,5 +1,5 @@
 import { meetsEfficiencyRule, type Rule } from '../../core/efficiencyRules';
-import { bil, doeKind, doeLevels, kva, p0, phases, pk, withSample } from '../arguments';
+import { doeTable, kva, p0, pk, withSample } from '../arguments';
 import { choice, inGroup, num } from '../declaration';
 
 const { each } = inGroup('Efficiency regulations');
@@ -19,10 +19,7 @@ export const COMPLIES = each({
       }),
       'both',
     ),
-    doeKind,
-    phases,
-    doeLevels,
-    bil,
+    ...doeTable,
     num('p0_eu_w', 'W', 'For "both": no-load loss measured for the EU rule (50 Hz).', 410, { optional: true }),
     num('pk_eu_w', 'W', 'For "both": load loss at rated current at 75 °C, for the EU rule.', 3850, { optional: true }),
   ],

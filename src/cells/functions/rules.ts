@@ -1,5 +1,5 @@
 import { doeMinimumEfficiency, euMaximumLoss } from '../../core/efficiencyRules';
-import { bil, doeKind, doeLevels, kva, phases, withSample } from '../arguments';
+import { doeTable, kva, withSample } from '../arguments';
 import { bool, choice, inGroup, num } from '../declaration';
 
 const { each } = inGroup('Efficiency regulations');
@@ -10,10 +10,7 @@ export const DOEMIN = each({
   source: '10 CFR 431.196 (a)(2)–(a)(3), (b)(2)–(b)(4), (c)(2)–(c)(3); scope of 10 CFR 431.192',
   args: [
     withSample(kva, 500),
-    doeKind,
-    phases,
-    doeLevels,
-    bil,
+    ...doeTable,
     num('hv_v', 'V', 'Rated input (primary) voltage, line-to-line; checked against the regulation’s 34.5 kV and the 600 V line between "lvdry" and "mvdry".', 12470, { optional: true }),
     num('lv_v', 'V', 'Rated output (secondary) voltage, line-to-line; checked against the regulation’s 600 V.', 480, { optional: true }),
   ],
