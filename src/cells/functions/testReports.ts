@@ -25,6 +25,8 @@ const windings = choice('windings', '"two-winding" (default) or "other": three o
   options: ['two-winding', 'other'] as const satisfies readonly WindingArrangement[],
   default: 'two-winding',
 });
+/** What a tolerance also depends on, last in TESTTOL and TESTOK: the measured impedance (IEC ratio) and the windings (impedance, IEC ratio). */
+const unitDetails = [zForRatio, windings] as const;
 
 export const TESTTOL = each({
   name: 'TESTTOL',
@@ -35,8 +37,7 @@ export const TESTTOL = each({
     num('guaranteed', 'as the item', 'Guaranteed (declared) value: W for losses, a fraction for impedance and no-load current (e.g. 6%), the ratio itself for ratio.', 12000),
     standard,
     choice('bound', '"upper" for the highest accepted result, "lower" for the lowest.', { options: ['upper', 'lower'], default: 'upper' }),
-    zForRatio,
-    windings,
+    ...unitDetails,
   ],
   result: { type: 'number', unit: 'as guaranteed' },
   compute: toleranceLimit,
@@ -51,8 +52,7 @@ export const TESTOK = each({
     num('guaranteed', 'as the item', 'Guaranteed (declared) value.', 12000),
     item,
     standard,
-    zForRatio,
-    windings,
+    ...unitDetails,
   ],
   result: { type: 'boolean', unit: 'TRUE/FALSE' },
   compute: withinTolerance,
