@@ -90,12 +90,14 @@ export const TAPBEST = each({
 });
 
 const measured = num('measured_ratio', 'ratio', 'Turns ratio read by the ratio test (HV:LV, per phase).', 47.7);
+/** A ratio test: the measured ratio and the nameplate it is compared with (RATIODEV, RATIOOK). */
+const ratioTest = [measured, ...nameplate] as const;
 
 export const RATIODEV = each({
   name: 'RATIODEV',
   help: 'Deviation of a measured turns ratio from the nameplate ratio, as a fraction: (measured − nameplate) / nameplate.',
   source: 'IEEE C57.12.90 ratio test; IEC 60076-1 Table 1',
-  args: [measured, ...nameplate],
+  args: [...ratioTest],
   result: { type: 'number', unit: 'fraction' },
   compute: ratioDeviation,
 });
@@ -105,8 +107,7 @@ export const RATIOOK = each({
   help: 'TRUE when a measured turns ratio is within tolerance of the nameplate ratio (default ±0.5 %).',
   source: 'IEEE C57.12.00 ratio tolerance ±0.5 % (from memory); IEC 60076-1 Table 1',
   args: [
-    measured,
-    ...nameplate,
+    ...ratioTest,
     num('tolerance', 'fraction', 'Allowed deviation as a percentage; IEC 60076-1 also caps it at 1/10 of the impedance percentage.', 0.005, {
       default: 0.005,
     }),
