@@ -95,47 +95,29 @@ export const NORMAL_LIFE_HOURS = 180_000;
 
 const IEC_TABLE_4 = 'IEC 60076-7 Table 4 (from memory)';
 
-/** The figures a row takes from its table, in the order the table gives them. */
-type TableFigures = Pick<
-  ThermalCharacteristics,
-  'oilExponent' | 'windingExponent' | 'lossRatio' | 'hotSpotFactor' | 'topOilRise' | 'hotSpotGradient' | 'oilTimeConstant' | 'windingTimeConstant' | 'k11' | 'k21' | 'k22'
->;
+/** The figures of an IEC 60076-7 Table 4 row, in the standard's column order (τo, τw in minutes; Δθor, Hgr in K). */
+type Table4Figures = readonly [x: number, y: number, R: number, H: number, τo: number, τw: number, Δθor: number, Hgr: number, k11: number, k21: number, k22: number];
 
 /** An IEC 60076-7 Table 4 row: kraft paper (the table's rated points reach 98 °C) and the normal life. */
-function iecRow(cooling: Cooling, unit: 'distribution' | 'power', figures: TableFigures): ThermalCharacteristics {
+function iecRow(cooling: Cooling, unit: 'distribution' | 'power', figures: Table4Figures): ThermalCharacteristics {
+  const [oilExponent, windingExponent, lossRatio, hotSpotFactor, oilTimeConstant, windingTimeConstant, topOilRise, hotSpotGradient, k11, k21, k22] = figures;
   const units = unit === 'distribution' ? 'distribution transformers' : 'medium and large power transformers';
-  return { method: 'IEC', cooling, unit, ...figures, paper: 'normal', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEC_TABLE_4}, ${units}, ${cooling}` };
+  return {
+    method: 'IEC', cooling, unit,
+    oilExponent, windingExponent, lossRatio, hotSpotFactor, topOilRise, hotSpotGradient, oilTimeConstant, windingTimeConstant, k11, k21, k22,
+    paper: 'normal', normalLifeHours: NORMAL_LIFE_HOURS, source: `${IEC_TABLE_4}, ${units}, ${cooling}`,
+  };
 }
 
-/** IEC 60076-7 Table 4, distribution transformers (ONAN only). */
-export const IEC_DISTRIBUTION_ONAN: ThermalCharacteristics = iecRow('ONAN', 'distribution', {
-  oilExponent: 0.8, windingExponent: 1.6, lossRatio: 5, hotSpotFactor: 1.1,
-  topOilRise: 55, hotSpotGradient: 23, oilTimeConstant: 180, windingTimeConstant: 4,
-  k11: 1.0, k21: 1.0, k22: 2.0,
-});
+/** IEC 60076-7 Table 4, distribution transformers (ONAN only); figures x, y, R, H, τo, τw, Δθor, Hgr, k11, k21, k22. */
+export const IEC_DISTRIBUTION_ONAN: ThermalCharacteristics = iecRow('ONAN', 'distribution', [0.8, 1.6, 5, 1.1, 180, 4, 55, 23, 1.0, 1.0, 2.0]);
 
-/** IEC 60076-7 Table 4, medium and large power transformers. */
+/** IEC 60076-7 Table 4, medium and large power transformers; figures as in IEC_DISTRIBUTION_ONAN. */
 export const IEC_POWER: Readonly<Record<Cooling, ThermalCharacteristics>> = {
-  ONAN: iecRow('ONAN', 'power', {
-    oilExponent: 0.8, windingExponent: 1.3, lossRatio: 6, hotSpotFactor: 1.3,
-    topOilRise: 52, hotSpotGradient: 26, oilTimeConstant: 210, windingTimeConstant: 10,
-    k11: 0.5, k21: 2.0, k22: 2.0,
-  }),
-  ONAF: iecRow('ONAF', 'power', {
-    oilExponent: 0.8, windingExponent: 1.3, lossRatio: 6, hotSpotFactor: 1.3,
-    topOilRise: 52, hotSpotGradient: 26, oilTimeConstant: 150, windingTimeConstant: 7,
-    k11: 0.5, k21: 2.0, k22: 2.0,
-  }),
-  OF: iecRow('OF', 'power', {
-    oilExponent: 1.0, windingExponent: 1.3, lossRatio: 6, hotSpotFactor: 1.3,
-    topOilRise: 56, hotSpotGradient: 22, oilTimeConstant: 90, windingTimeConstant: 7,
-    k11: 1.0, k21: 1.3, k22: 1.0,
-  }),
-  OD: iecRow('OD', 'power', {
-    oilExponent: 1.0, windingExponent: 2.0, lossRatio: 6, hotSpotFactor: 1.3,
-    topOilRise: 49, hotSpotGradient: 29, oilTimeConstant: 90, windingTimeConstant: 7,
-    k11: 1.0, k21: 1.0, k22: 1.0,
-  }),
+  ONAN: iecRow('ONAN', 'power', [0.8, 1.3, 6, 1.3, 210, 10, 52, 26, 0.5, 2.0, 2.0]),
+  ONAF: iecRow('ONAF', 'power', [0.8, 1.3, 6, 1.3, 150, 7, 52, 26, 0.5, 2.0, 2.0]),
+  OF: iecRow('OF', 'power', [1.0, 1.3, 6, 1.3, 90, 7, 56, 22, 1.0, 1.3, 1.0]),
+  OD: iecRow('OD', 'power', [1.0, 2.0, 6, 1.3, 90, 7, 49, 29, 1.0, 1.0, 1.0]),
 };
 
 const IEEE_EXPONENTS = 'IEEE C57.91 exponents n, m (from memory); 55 K + 25 K rated rises (common practice, 65 °C-rise unit)';
