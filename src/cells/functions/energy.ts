@@ -32,23 +32,20 @@ export const EOUT = each({
   compute: energyDelivered,
 });
 
-export const LOADFACTOR = each({
-  name: 'LOADFACTOR',
-  help: 'Load factor of a profile of equal steps: mean load / peak load.',
-  source: 'common practice',
-  args: [loads],
-  result: { type: 'number', unit: 'fraction' },
-  compute: loadFactor,
-});
+/** A factor of a profile of equal steps, from its loads alone: LOADFACTOR and LOSSFACTOR. */
+const profileFactor = (name: string, help: string, factor: (loads: Float64Array) => number) =>
+  each({
+    name,
+    help,
+    source: 'common practice',
+    args: [loads],
+    result: { type: 'number', unit: 'fraction' },
+    compute: factor,
+  });
 
-export const LOSSFACTOR = each({
-  name: 'LOSSFACTOR',
-  help: 'Loss factor of a profile of equal steps, exact: mean of load² / peak load².',
-  source: 'common practice',
-  args: [loads],
-  result: { type: 'number', unit: 'fraction' },
-  compute: lossFactor,
-});
+export const LOADFACTOR = profileFactor('LOADFACTOR', 'Load factor of a profile of equal steps: mean load / peak load.', loadFactor);
+
+export const LOSSFACTOR = profileFactor('LOSSFACTOR', 'Loss factor of a profile of equal steps, exact: mean of load² / peak load².', lossFactor);
 
 export const LSF = each({
   name: 'LSF',
