@@ -16,7 +16,17 @@ import {
   shortCircuitTemperature,
 } from '../../src/core/shortCircuit';
 import { faultCurrent } from '../../src/core/current';
-import { toleranceLimit, withinTolerance } from '../../src/core/testReport';
+import { toleranceLimit, withinTolerance, type Bound, type TestItem, type TestStandard, type WindingArrangement } from '../../src/core/testReport';
+
+/** A worked tolerance limit: toleranceLimit's arguments, then the limit the standard gives. */
+type Limit = [item: TestItem, guaranteed: number, standard: TestStandard, bound: Bound, z: number | undefined, windings: WindingArrangement, limit: number];
+
+/** Each limit to 14 significant digits, for a guarantee in W and a fraction alike. */
+function checkLimits(limits: Limit[]): void {
+  it.each(limits)('%s, %s guaranteed, %s %s (z %s, %s)', (item, guaranteed, standard, bound, z, windings, limit) => {
+    expect(toleranceLimit(item, guaranteed, standard, bound, z, windings) / limit).toBeCloseTo(1, 14);
+  });
+}
 
 describe('IEC 60076-1 Table 1 tolerances', () => {
   // Source: IEC 60076-1:1993+A1:1999 Table 1, stored copy (scribd.com/document/834447192,
@@ -24,13 +34,23 @@ describe('IEC 60076-1 Table 1 tolerances', () => {
   // tolerance for total losses is not exceeded; 2) ratio on the principal tapping, first pair of
   // windings: the lower of ±0.5 % of the declared ratio and ±1/10 of the actual percentage
   // impedance on the principal tapping.
-  it('total losses: +10 %, no lower limit', () => {
-    expect(toleranceLimit('total loss', 12000, 'IEC', 'upper', undefined, 'two-winding')).toBeCloseTo(13200, 9);
+  checkLimits([
+    // Total losses: +10 %.
+    ['total loss', 12000, 'IEC', 'upper', undefined, 'two-winding', 13200],
+    // Component losses: +15 % each.
+    ['no-load loss', 1100, 'IEC', 'upper', undefined, 'two-winding', 1265],
+    ['load loss', 10500, 'IEC', 'upper', undefined, 'two-winding', 12075],
+    // Ratio: 6 % impedance → 0.6 %, so ±0.5 % governs; 4 % impedance → ±0.4 %.
+    ['ratio', 25, 'IEC', 'upper', 0.06, 'two-winding', 25.125],
+    ['ratio', 25, 'IEC', 'lower', 0.04, 'two-winding', 24.9],
+    // From memory: IEC 60076-1 Table 1, short-circuit impedance on the principal tapping (±7.5 %
+    // from 10 % up, ±10 % below) and no-load current (+30 %) rows (not in the stored excerpt).
+    ['impedance', 0.06, 'IEC', 'lower', undefined, 'two-winding', 0.054],
+    ['impedance', 0.12, 'IEC', 'upper', undefined, 'two-winding', 0.129],
+    ['no-load current', 0.008, 'IEC', 'upper', undefined, 'two-winding', 0.0104],
+  ]);
+  it('total losses have no lower limit', () => {
     expect(() => toleranceLimit('total loss', 12000, 'IEC', 'lower', undefined, 'two-winding')).toThrow(/no lower limit/);
-  });
-  it('component losses: +15 % each', () => {
-    expect(toleranceLimit('no-load loss', 1100, 'IEC', 'upper', undefined, 'two-winding')).toBeCloseTo(1265, 9);
-    expect(toleranceLimit('load loss', 10500, 'IEC', 'upper', undefined, 'two-winding')).toBeCloseTo(12075, 9);
   });
   it('the worked no-load loss example: 10,000 W guaranteed, 11,500 W passes, more fails', () => {
     // Source: blog.wrindu.com, "How to calculate transformer no load loss tolerance under IEC":
@@ -38,35 +58,24 @@ describe('IEC 60076-1 Table 1 tolerances', () => {
     expect(withinTolerance(11500, 10000, 'no-load loss', 'IEC', undefined, 'two-winding')).toBe(true);
     expect(withinTolerance(11501, 10000, 'no-load loss', 'IEC', undefined, 'two-winding')).toBe(false);
   });
-  it('ratio: the lower of ±0.5 % and one tenth of the impedance', () => {
-    // 6 % impedance → 0.6 %, so ±0.5 % governs; 4 % impedance → ±0.4 %.
-    expect(toleranceLimit('ratio', 25, 'IEC', 'upper', 0.06, 'two-winding')).toBeCloseTo(25.125, 12);
-    expect(toleranceLimit('ratio', 25, 'IEC', 'lower', 0.04, 'two-winding')).toBeCloseTo(24.9, 12);
+  it('ratio: a 0.44 % deviation fails at 4 % impedance (±0.4 %) and passes at 6 % (±0.5 %); no impedance, no limit', () => {
     expect(withinTolerance(25.11, 25, 'ratio', 'IEC', 0.04, 'two-winding')).toBe(false);
     expect(withinTolerance(25.11, 25, 'ratio', 'IEC', 0.06, 'two-winding')).toBe(true);
     expect(() => toleranceLimit('ratio', 25, 'IEC', 'upper', undefined, 'two-winding')).toThrow(/argument z: is blank/);
   });
-  it('impedance ±7.5 % from 10 % up, ±10 % below; no-load current +30 % (from memory)', () => {
-    // From memory: IEC 60076-1 Table 1, short-circuit impedance on the principal tapping and
-    // no-load current rows (not in the stored excerpt).
-    expect(toleranceLimit('impedance', 0.06, 'IEC', 'lower', undefined, 'two-winding')).toBeCloseTo(0.054, 12);
-    expect(toleranceLimit('impedance', 0.12, 'IEC', 'upper', undefined, 'two-winding')).toBeCloseTo(0.129, 12);
-    expect(toleranceLimit('no-load current', 0.008, 'IEC', 'upper', undefined, 'two-winding')).toBeCloseTo(0.0104, 12);
-  });
 });
 
 describe('IEEE C57.12.00 tolerances', () => {
-  it('impedance ±7.5 % for two windings, ±10 % for three or more, zigzag or autotransformers', () => {
+  checkLimits([
     // Source: electrical-engineering-portal.com, "Dry transformer percent impedance definition",
     // Important notes: two-winding ± 7.5 %; three or more windings or zigzag ± 10 %; autotransformer ± 10 %.
-    expect(toleranceLimit('impedance', 0.0575, 'IEEE', 'upper', undefined, 'two-winding')).toBeCloseTo(0.0575 * 1.075, 12);
-    expect(toleranceLimit('impedance', 0.0575, 'IEEE', 'lower', undefined, 'other')).toBeCloseTo(0.0575 * 0.9, 12);
-  });
-  it('no-load losses +10 %, total losses +6 %, ratio ±0.5 % (from memory)', () => {
-    expect(toleranceLimit('no-load loss', 1100, 'IEEE', 'upper', undefined, 'two-winding')).toBeCloseTo(1210, 9);
-    expect(toleranceLimit('total loss', 10000, 'IEEE', 'upper', undefined, 'two-winding')).toBeCloseTo(10600, 9);
-    expect(toleranceLimit('ratio', 25, 'IEEE', 'lower', undefined, 'two-winding')).toBeCloseTo(24.875, 12);
-  });
+    ['impedance', 0.0575, 'IEEE', 'upper', undefined, 'two-winding', 0.0575 * 1.075],
+    ['impedance', 0.0575, 'IEEE', 'lower', undefined, 'other', 0.0575 * 0.9],
+    // From memory: no-load losses +10 %, total losses +6 %, ratio ±0.5 %.
+    ['no-load loss', 1100, 'IEEE', 'upper', undefined, 'two-winding', 1210],
+    ['total loss', 10000, 'IEEE', 'upper', undefined, 'two-winding', 10600],
+    ['ratio', 25, 'IEEE', 'lower', undefined, 'two-winding', 24.875],
+  ]);
   it('no separate load-loss or exciting-current tolerance: no row', () => {
     expect(() => toleranceLimit('load loss', 9000, 'IEEE', 'upper', undefined, 'two-winding')).toThrow(/total losses/);
     expect(() => toleranceLimit('no-load current', 0.01, 'IEEE', 'upper', undefined, 'two-winding')).toThrow(/no tolerance/);
