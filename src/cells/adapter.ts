@@ -361,6 +361,30 @@ function runEach(a: Adapted, call: (b: ArgValue[]) => Scalar, raw: unknown[]): u
   };
   const out = new Array<unknown[]>(rows);
   if (cols === 1) {
+    // The common case, a column of numbers against constants: each element tests its cells and
+    // calls compute without the general element step, which it falls back to for any other cell.
+    if (constantFault === undefined && varying.every((r) => r.numeric && r.rowSel === 1)) {
+      const columns = varying.map((r) => r.cells);
+      const slots = varying.map((r) => r.k);
+      for (let i = 0; i < rows; i++) {
+        let q = 0;
+        for (; q < v; q++) {
+          const cell = columns[q]![i]![0];
+          if (!isFiniteNumber(cell)) break;
+          buf[slots[q]!] = cell;
+        }
+        if (q < v) {
+          out[i] = [element(i, 0)];
+          continue;
+        }
+        try {
+          out[i] = [resultCell(call(buf), makeError)];
+        } catch (error) {
+          out[i] = [refusal(error, makeError)];
+        }
+      }
+      return out;
+    }
     for (let i = 0; i < rows; i++) out[i] = [element(i, 0)];
     return out;
   }
