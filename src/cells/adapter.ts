@@ -7,7 +7,8 @@
  *
  * A call runs three steps: resolve the shape (each argument read as a matrix and folded into the
  * broadcast shape), coerce the constants (series and single cells, once per call), then evaluate
- * each element (the ranged arguments read straight from their cells, then compute).
+ * each element (the ranged arguments read straight from their cells, then compute). A column of
+ * numbers against constants takes a shorter loop, of which each function has its own copy.
  */
 import { argumentMessage, InputError, NoAnswerError, NotInTableError } from '../core/errors';
 import { notAnOption, optionMatcher } from '../core/guards';
@@ -26,6 +27,13 @@ export interface AdaptOptions {
    * Without it an error value is refused like any other non-number, with a #VALUE! message.
    */
   readonly isError?: (value: unknown) => boolean;
+  /**
+   * Compiles a function from its source text (`return (function …)`), where the host allows code
+   * to be generated at run time: each function then runs its own copy of the column loop
+   * (`ownCopy`). Without it every function shares one loop — the add-in's case, whose bundle builds
+   * no code at run time.
+   */
+  readonly compile?: (source: string) => unknown;
 }
 
 /** A stand-in error value for tests and tools that have no spreadsheet of their own. */
@@ -285,6 +293,101 @@ function caller(compute: EachCompute, n: number): (b: ArgValue[]) => Scalar {
   }
 }
 
+/**
+ * The common case, a column of numbers against constants: each row tests its cells and calls
+ * compute without the general element step, which it falls back to (`element`) for any other
+ * cell. It reads nothing but its parameters, so that each adapted function can run a copy of its
+ * own (see `ownCopy`).
+ */
+function numberColumnLoop(
+  compute: EachCompute,
+  buf: ArgValue[],
+  columns: readonly unknown[][][],
+  slots: readonly number[],
+  rows: number,
+  element: (i: number) => unknown,
+  makeError: ErrorFactory,
+  finish: typeof resultCell,
+  refuse: typeof refusal,
+): unknown[][] {
+  const out = new Array<unknown[]>(rows);
+  const v = columns.length;
+  const arity = buf.length;
+  for (let i = 0; i < rows; i++) {
+    let q = 0;
+    for (; q < v; q++) {
+      const cell = columns[q]![i]![0];
+      if (typeof cell !== 'number' || cell - cell !== 0) break;
+      buf[slots[q]!] = cell;
+    }
+    if (q < v) {
+      out[i] = [element(i)];
+      continue;
+    }
+    try {
+      // Written out per arity so that the call is a plain one compute can be inlined into.
+      let value: Scalar;
+      if (arity === 1) value = compute(buf[0]);
+      else if (arity === 2) value = compute(buf[0], buf[1]);
+      else if (arity === 3) value = compute(buf[0], buf[1], buf[2]);
+      else if (arity === 4) value = compute(buf[0], buf[1], buf[2], buf[3]);
+      else if (arity === 5) value = compute(buf[0], buf[1], buf[2], buf[3], buf[4]);
+      else if (arity === 6) value = compute(buf[0], buf[1], buf[2], buf[3], buf[4], buf[5]);
+      else value = compute(...buf);
+      out[i] = [finish(value, makeError)];
+    } catch (error) {
+      out[i] = [refuse(error, makeError)];
+    }
+  }
+  return out;
+}
+
+type NumberColumnLoop = typeof numberColumnLoop;
+
+/**
+ * A copy of a self-contained function, compiled from its own source by the host's `compile`. V8
+ * keeps one set of type feedback per function in the source, shared by every closure of it; a
+ * loop that calls many different computes through one call site learns that the site is
+ * megamorphic and stops inlining any of them, which costs the column loop about half its speed.
+ * A copy per adapted function keeps its call site to one compute. Where compiling fails, or the
+ * copy does not pass `works`, the shared function is returned: the same results, slower.
+ */
+export function ownCopy<F extends (...args: never[]) => unknown>(
+  f: F,
+  label: string,
+  works: (copy: F) => boolean,
+  compile: (source: string) => unknown,
+): F {
+  let copy: unknown;
+  try {
+    // The label makes each source distinct: V8 caches compiled code by source text, and two
+    // copies of one text would share their feedback again.
+    copy = compile(`return (${f.toString()});\n//# sourceURL=fluxbook/${encodeURIComponent(label)}`);
+  } catch {
+    return f;
+  }
+  // A build step that rewrites function bodies (a coverage counter, a bundler's helper) can leave
+  // the copy naming something it cannot see; such a copy is checked once here and not used.
+  try {
+    if (typeof copy === 'function' && works(copy as F)) return copy as F;
+  } catch {
+    // falls through to the shared function
+  }
+  return f;
+}
+
+/**
+ * The copy runs and hands a text cell to the element step. Only that path is tried: a compute
+ * called here would be a second callee at the copy's call site, which is what the copy avoids.
+ */
+function columnLoopWorks(loop: NumberColumnLoop): boolean {
+  const unused = (): never => {
+    throw new Error('not called');
+  };
+  const out = loop(unused, [0], [[['text']]], [0], 1, () => 'element step', unused, resultCell, refusal);
+  return out.length === 1 && out[0]![0] === 'element step';
+}
+
 /** A ranged argument, read straight from its cells in the element loop (no copy of the range). */
 interface Varying {
   readonly k: number;
@@ -313,6 +416,12 @@ interface Adapted {
   readonly isError: IsError;
 }
 
+/** What `adapt` fixes for an `each` function besides: its compute and its own column loop. */
+interface AdaptedEach extends Adapted {
+  readonly compute: EachCompute;
+  readonly numberColumn: NumberColumnLoop;
+}
+
 /** Steps 1 and 2 for an `each` function, argument by argument in declaration order. */
 function prepare({ decls, readers, isError }: Adapted, raw: unknown[]): Prepared {
   const n = decls.length;
@@ -337,7 +446,7 @@ function prepare({ decls, readers, isError }: Adapted, raw: unknown[]): Prepared
   return { rows: shape.rows, cols: shape.cols, buf, varying, constantFault };
 }
 
-function runEach(a: Adapted, call: (b: ArgValue[]) => Scalar, raw: unknown[]): unknown[][] {
+function runEach(a: AdaptedEach, call: (b: ArgValue[]) => Scalar, raw: unknown[]): unknown[][] {
   const makeError = a.makeError;
   const { rows, cols, buf, varying, constantFault } = prepare(a, raw);
   const v = varying.length;
@@ -359,35 +468,17 @@ function runEach(a: Adapted, call: (b: ArgValue[]) => Scalar, raw: unknown[]): u
       return refusal(error, makeError);
     }
   };
-  const out = new Array<unknown[]>(rows);
   if (cols === 1) {
-    // The common case, a column of numbers against constants: each element tests its cells and
-    // calls compute without the general element step, which it falls back to for any other cell.
     if (constantFault === undefined && varying.every((r) => r.numeric && r.rowSel === 1)) {
       const columns = varying.map((r) => r.cells);
       const slots = varying.map((r) => r.k);
-      for (let i = 0; i < rows; i++) {
-        let q = 0;
-        for (; q < v; q++) {
-          const cell = columns[q]![i]![0];
-          if (!isFiniteNumber(cell)) break;
-          buf[slots[q]!] = cell;
-        }
-        if (q < v) {
-          out[i] = [element(i, 0)];
-          continue;
-        }
-        try {
-          out[i] = [resultCell(call(buf), makeError)];
-        } catch (error) {
-          out[i] = [refusal(error, makeError)];
-        }
-      }
-      return out;
+      return a.numberColumn(a.compute, buf, columns, slots, rows, (i) => element(i, 0), makeError, resultCell, refusal);
     }
+    const out = new Array<unknown[]>(rows);
     for (let i = 0; i < rows; i++) out[i] = [element(i, 0)];
     return out;
   }
+  const out = new Array<unknown[]>(rows);
   for (let i = 0; i < rows; i++) {
     const row = new Array<unknown>(cols);
     for (let j = 0; j < cols; j++) row[j] = element(i, j);
@@ -419,7 +510,10 @@ export function adapt(decl: CellFunctionDecl, makeError: ErrorFactory, options: 
   let run: (raw: unknown[]) => unknown[][];
   if (decl.kind === 'each') {
     const call = caller(decl.compute, decl.args.length);
-    run = (raw) => runEach(a, call, raw);
+    const compile = options.compile;
+    const numberColumn = compile === undefined ? numberColumnLoop : ownCopy(numberColumnLoop, `${decl.name}.column`, columnLoopWorks, compile);
+    const each: AdaptedEach = { ...a, compute: decl.compute, numberColumn };
+    run = (raw) => runEach(each, call, raw);
   } else {
     const compute = decl.compute;
     run = (raw) => runBlock(a, compute, raw);

@@ -14,7 +14,7 @@ import { adapt, type CellFunction } from '../cells/adapter';
 import { findFunction, NAMESPACE } from '../cells/catalog';
 import type { CellFunctionDecl } from '../cells/declaration';
 import { ENGINE_CONFIG } from './engine';
-import { hyperFormulaError } from './functions';
+import { engineAdaptOptions, hyperFormulaError } from './functions';
 import type { SimpleArg } from './formulas';
 import type { FormulaCell, PackageRead } from './read';
 
@@ -25,7 +25,7 @@ const fns = new Map<string, CellFunction>();
 function cellFunction(decl: CellFunctionDecl): CellFunction {
   let fn = fns.get(decl.name);
   if (!fn) {
-    fn = adapt(decl, hyperFormulaError, { isError: (v) => v instanceof CellError });
+    fn = adapt(decl, hyperFormulaError, engineAdaptOptions);
     fns.set(decl.name, fn);
   }
   return fn;

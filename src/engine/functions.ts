@@ -33,14 +33,18 @@ import {
   type ImplementedFunctions,
   type SimpleCellAddress,
 } from 'hyperformula';
-import { adapt, type CellFunction, type ErrorKind } from '../cells/adapter';
+import { type AdaptOptions, adapt, type CellFunction, type ErrorKind } from '../cells/adapter';
 import { catalog, formulaName } from '../cells/catalog';
 import type { CellFunctionDecl } from '../cells/declaration';
+import { compileFunctionSource } from './compile';
 import { formulaVertex, type PluginInternals, type State } from './internals';
 
 const ERROR_TYPE: Record<ErrorKind, ErrorType> = { VALUE: ErrorType.VALUE, NUM: ErrorType.NUM, NA: ErrorType.NA };
 
 export const hyperFormulaError = (kind: ErrorKind, message: string): CellError => new CellError(ERROR_TYPE[kind], message);
+
+/** How the engine adapts a declaration: HyperFormula's errors pass through, each function has its own column loop. */
+export const engineAdaptOptions: AdaptOptions = { isError: (v) => v instanceof CellError, compile: compileFunctionSource };
 
 /**
  * What one calculation wants to hear from the functions while HyperFormula runs them. HyperFormula
@@ -226,7 +230,7 @@ export function buildPlugin(decls: readonly CellFunctionDecl[]): FunctionPluginD
       enableArrayArithmeticForArguments: true,
     };
     implemented[formulaName(decl)] = metadata;
-    const fn = adapt(decl, hyperFormulaError, { isError: (v) => v instanceof CellError });
+    const fn = adapt(decl, hyperFormulaError, engineAdaptOptions);
     proto[method] = function (this: PluginInternals, ast: Ast, state: State) {
       return evaluate(this, decl, fn, metadata, ast, state);
     };
