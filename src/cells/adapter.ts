@@ -295,9 +295,10 @@ function caller(compute: EachCompute, n: number): (b: ArgValue[]) => Scalar {
 
 /**
  * The common case, a column of numbers against constants: each row tests its cells and calls
- * compute without the general element step, which it falls back to (`element`) for any other
- * cell. It reads nothing but its parameters, so that each adapted function can run a copy of its
- * own (see `ownCopy`).
+ * compute without the general element step; a row with any other cell is left to that step, its
+ * index pushed to `others`. It reads nothing but its parameters and calls nothing but compute and
+ * the two small result functions, so that each adapted function can run a copy of its own (see
+ * `ownCopy`) in which compute is inlined.
  */
 function numberColumnLoop(
   compute: EachCompute,
@@ -305,7 +306,7 @@ function numberColumnLoop(
   columns: readonly unknown[][][],
   slots: readonly number[],
   rows: number,
-  element: (i: number) => unknown,
+  others: number[],
   makeError: ErrorFactory,
   finish: typeof resultCell,
   refuse: typeof refusal,
@@ -321,7 +322,7 @@ function numberColumnLoop(
       buf[slots[q]!] = cell;
     }
     if (q < v) {
-      out[i] = [element(i)];
+      others.push(i);
       continue;
     }
     try {
@@ -377,15 +378,16 @@ export function ownCopy<F extends (...args: never[]) => unknown>(
 }
 
 /**
- * The copy runs and hands a text cell to the element step. Only that path is tried: a compute
+ * The copy runs and leaves a text cell to the element step. Only that path is tried: a compute
  * called here would be a second callee at the copy's call site, which is what the copy avoids.
  */
 function columnLoopWorks(loop: NumberColumnLoop): boolean {
   const unused = (): never => {
     throw new Error('not called');
   };
-  const out = loop(unused, [0], [[['text']]], [0], 1, () => 'element step', unused, resultCell, refusal);
-  return out.length === 1 && out[0]![0] === 'element step';
+  const others: number[] = [];
+  const out = loop(unused, [0], [[['text']]], [0], 1, others, unused, resultCell, refusal);
+  return out.length === 1 && others.length === 1 && others[0] === 0;
 }
 
 /** A ranged argument, read straight from its cells in the element loop (no copy of the range). */
@@ -472,7 +474,10 @@ function runEach(a: AdaptedEach, call: (b: ArgValue[]) => Scalar, raw: unknown[]
     if (constantFault === undefined && varying.every((r) => r.numeric && r.rowSel === 1)) {
       const columns = varying.map((r) => r.cells);
       const slots = varying.map((r) => r.k);
-      return a.numberColumn(a.compute, buf, columns, slots, rows, (i) => element(i, 0), makeError, resultCell, refusal);
+      const others: number[] = [];
+      const out = a.numberColumn(a.compute, buf, columns, slots, rows, others, makeError, resultCell, refusal);
+      for (const i of others) out[i] = [element(i, 0)];
+      return out;
     }
     const out = new Array<unknown[]>(rows);
     for (let i = 0; i < rows; i++) out[i] = [element(i, 0)];
