@@ -335,7 +335,16 @@ function numberColumnLoop(
       else if (arity === 5) value = compute(buf[0], buf[1], buf[2], buf[3], buf[4]);
       else if (arity === 6) value = compute(buf[0], buf[1], buf[2], buf[3], buf[4], buf[5]);
       else value = compute(...buf);
-      out[i] = [finish(value, makeError)];
+      const result = finish(value, makeError);
+      // A number gets a row of its own allocation site, which V8 learns to store as a raw double:
+      // a row literal shared with text and error results would keep every number boxed, and the
+      // collector copy each box with its row. (Two identical literals would be merged by the
+      // minifier, hence the store.)
+      if (typeof result === 'number') {
+        const row = [0];
+        row[0] = result;
+        out[i] = row;
+      } else out[i] = [result];
     } catch (error) {
       out[i] = [refuse(error, makeError)];
     }
