@@ -25,6 +25,9 @@ const windings = choice('windings', '"two-winding" (default) or "other": three o
   options: ['two-winding', 'other'] as const satisfies readonly WindingArrangement[],
   default: 'two-winding',
 });
+/** The guaranteed value a test result is held against, in TESTTOL and TESTOK. */
+const guaranteed = num('guaranteed', 'as the item', 'Guaranteed (declared) value: W for losses, a fraction for impedance and no-load current (e.g. 6%), the ratio itself for ratio.', 12000);
+
 /** What a tolerance also depends on, last in TESTTOL and TESTOK: the measured impedance (IEC ratio) and the windings (impedance, IEC ratio). */
 const unitDetails = [zForRatio, windings] as const;
 
@@ -34,7 +37,7 @@ export const TESTTOL = each({
   source: 'IEC 60076-1 Table 1 (losses and ratio rows confirmed in a stored copy of the 1993+A1 edition; impedance and no-load current from memory); IEEE C57.12.00 tolerances (from memory; impedance row as quoted for IEEE dry-type units)',
   args: [
     item,
-    num('guaranteed', 'as the item', 'Guaranteed (declared) value: W for losses, a fraction for impedance and no-load current (e.g. 6%), the ratio itself for ratio.', 12000),
+    guaranteed,
     standard,
     choice('bound', '"upper" for the highest accepted result, "lower" for the lowest.', { options: ['upper', 'lower'], default: 'upper' }),
     ...unitDetails,
@@ -49,7 +52,7 @@ export const TESTOK = each({
   source: 'IEC 60076-1 Table 1; IEEE C57.12.00 tolerances (see TESTTOL)',
   args: [
     num('measured', 'as the item', 'Result from the test report, in the unit of the guarantee.', 12800),
-    num('guaranteed', 'as the item', 'Guaranteed (declared) value.', 12000),
+    guaranteed,
     item,
     standard,
     ...unitDetails,
