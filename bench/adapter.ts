@@ -13,10 +13,10 @@
 import { type AdaptOptions, adapt, plainErrors } from '../src/cells/adapter';
 import { catalog, findFunction } from '../src/cells/catalog';
 import { efficiencyAt } from '../src/core/efficiency';
-import { compileFunctionSource } from '../src/engine/compile';
+import { engineAdaptOptions } from '../src/engine/functions';
 import { type BenchRow, meanMs, ms } from './harness';
 
-const engineLike: AdaptOptions = { compile: compileFunctionSource };
+const engineLike: AdaptOptions = engineAdaptOptions;
 const addInLike: AdaptOptions = {};
 
 /** Calls every `each` function of the catalog over a column of its first argument's sample. */

@@ -29,12 +29,12 @@ export interface AdaptOptions {
    */
   readonly isError?: (value: unknown) => boolean;
   /**
-   * Compiles a function from its source text (`return (function …)`), where the host allows code
-   * to be generated at run time: each function then runs its own copy of the column loop
-   * (`ownCopy`). Without it every function shares one loop — the add-in's case, whose bundle builds
-   * no code at run time.
+   * Gives a self-contained function a copy of its own, where the host can compile code at run
+   * time (the engine's `ownCopy`), and returns the function itself where it cannot. Each adapted
+   * function then runs its own copy of the column loop, checked once by `works`. Without it every
+   * function shares one loop — the add-in's case, whose bundle builds no code at run time.
    */
-  readonly compile?: (source: string) => unknown;
+  readonly copyLoop?: <F extends (...args: never[]) => unknown>(f: F, label: string, works: (copy: F) => boolean) => F;
 }
 
 /** A stand-in error value for tests and tools that have no spreadsheet of their own. */
@@ -299,7 +299,7 @@ function caller(compute: EachCompute, n: number): (b: ArgValue[]) => Scalar {
  * compute without the general element step; a row with any other cell is left to that step, its
  * index pushed to `others`. It reads nothing but its parameters and calls nothing but compute and
  * the two small result functions, so that each adapted function can run a copy of its own (see
- * `ownCopy`) in which compute is inlined.
+ * `AdaptOptions.copyLoop`) in which compute is inlined.
  */
 function numberColumnLoop(
   compute: EachCompute,
@@ -354,38 +354,6 @@ function numberColumnLoop(
 }
 
 type NumberColumnLoop = typeof numberColumnLoop;
-
-/**
- * A copy of a self-contained function, compiled from its own source by the host's `compile`. V8
- * keeps one set of type feedback per function in the source, shared by every closure of it; a
- * loop that calls many different computes through one call site learns that the site is
- * megamorphic and stops inlining any of them, which costs the column loop about half its speed.
- * A copy per adapted function keeps its call site to one compute. Where compiling fails, or the
- * copy does not pass `works`, the shared function is returned: the same results, slower.
- */
-export function ownCopy<F extends (...args: never[]) => unknown>(
-  f: F,
-  label: string,
-  works: (copy: F) => boolean,
-  compile: (source: string) => unknown,
-): F {
-  let copy: unknown;
-  try {
-    // The label makes each source distinct: V8 caches compiled code by source text, and two
-    // copies of one text would share their feedback again.
-    copy = compile(`return (${f.toString()});\n//# sourceURL=fluxbook/${encodeURIComponent(label)}`);
-  } catch {
-    return f;
-  }
-  // A build step that rewrites function bodies (a coverage counter, a bundler's helper) can leave
-  // the copy naming something it cannot see; such a copy is checked once here and not used.
-  try {
-    if (typeof copy === 'function' && works(copy as F)) return copy as F;
-  } catch {
-    // falls through to the shared function
-  }
-  return f;
-}
 
 /**
  * The copy runs and leaves a text cell to the element step. Only that path is tried: a compute
@@ -525,8 +493,7 @@ export function adapt(decl: CellFunctionDecl, makeError: ErrorFactory, options: 
   let run: (raw: unknown[]) => unknown[][];
   if (decl.kind === 'each') {
     const call = caller(decl.compute, decl.args.length);
-    const compile = options.compile;
-    const numberColumn = compile === undefined ? numberColumnLoop : ownCopy(numberColumnLoop, `${decl.name}.column`, columnLoopWorks, compile);
+    const numberColumn = options.copyLoop?.(numberColumnLoop, `${decl.name}.column`, columnLoopWorks) ?? numberColumnLoop;
     const each: AdaptedEach = { ...a, compute: decl.compute, numberColumn };
     run = (raw) => runEach(each, call, raw);
   } else {

@@ -36,7 +36,7 @@ import {
 import { type AdaptOptions, adapt, type CellFunction, type ErrorKind } from '../cells/adapter';
 import { catalog, formulaName } from '../cells/catalog';
 import type { CellFunctionDecl } from '../cells/declaration';
-import { compileFunctionSource } from './compile';
+import { ownCopy } from './compile';
 import { formulaVertex, type PluginInternals, type State } from './internals';
 
 const ERROR_TYPE: Record<ErrorKind, ErrorType> = { VALUE: ErrorType.VALUE, NUM: ErrorType.NUM, NA: ErrorType.NA };
@@ -44,7 +44,7 @@ const ERROR_TYPE: Record<ErrorKind, ErrorType> = { VALUE: ErrorType.VALUE, NUM: 
 export const hyperFormulaError = (kind: ErrorKind, message: string): CellError => new CellError(ERROR_TYPE[kind], message);
 
 /** How the engine adapts a declaration: HyperFormula's errors pass through, each function has its own column loop. */
-export const engineAdaptOptions: AdaptOptions = { isError: (v) => v instanceof CellError, compile: compileFunctionSource };
+export const engineAdaptOptions: AdaptOptions = { isError: (v) => v instanceof CellError, copyLoop: ownCopy };
 
 /**
  * What one calculation wants to hear from the functions while HyperFormula runs them. HyperFormula

@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { adapt, CellError, ownCopy, plainErrors } from '../../src/cells/adapter';
+import { adapt, CellError, plainErrors } from '../../src/cells/adapter';
 import { catalog, findFunction } from '../../src/cells/catalog';
 import { each, num, orRange } from '../../src/cells/declaration';
 import { efficiencyAt } from '../../src/core/efficiency';
 import { InputError } from '../../src/core/errors';
-import { compileFunctionSource } from '../../src/engine/compile';
+import { ownCopy } from '../../src/engine/compile';
 import { cellFunction } from '../support/cells';
 
 const cell = cellFunction;
@@ -183,36 +183,13 @@ describe('an argument that also takes a whole range (orRange)', () => {
   });
 });
 
-describe("each function's own copy of the column loop (ownCopy)", () => {
-  const double = (x: number): number => 2 * x;
-  const alwaysWorks = () => true;
-
-  it('compiles a distinct function that answers as the original does', () => {
-    const copy = ownCopy(double, 'test.double', alwaysWorks, compileFunctionSource);
-    expect(copy).not.toBe(double);
-    expect(copy(21)).toBe(42);
-  });
-
-  it('keeps the original where the host refuses to compile code (a content security policy)', () => {
-    const refuse = () => {
-      throw new EvalError('code generation from strings disallowed for this context');
-    };
-    expect(ownCopy(double, 'test.double', alwaysWorks, refuse)).toBe(double);
-  });
-
-  it('keeps the original where the copy fails its check, or names something it cannot see', () => {
-    expect(ownCopy(double, 'test.double', () => false, compileFunctionSource)).toBe(double);
-    const counted = { n: 0 };
-    const instrumented = (x: number): number => (counted.n++, 2 * x);
-    expect(ownCopy(instrumented, 'test.instrumented', (copy) => copy(1) === 2, compileFunctionSource)).toBe(instrumented);
-  });
-
+describe('the column loop, shared or copied per function', () => {
   it('gives a column of numbers mixed with blanks, text, errors and non-finite numbers the results of one call per cell, with its own loop or the shared one', () => {
     const host = Symbol('#DIV/0!');
     const isError = (v: unknown) => v === host;
     const decl = findFunction('EFF')!;
     const cells: unknown[] = [500, null, 1000, 'x', host, Number.NaN, Infinity, '', 1500, true];
-    for (const options of [{ isError }, { isError, compile: compileFunctionSource }]) {
+    for (const options of [{ isError }, { isError, copyLoop: ownCopy }]) {
       const eff = adapt(decl, plainErrors, options);
       const column = eff(cells.map((c) => [c]), 1400, 10500, 0.5, 1);
       const oneByOne = cells.map((c) => eff(c, 1400, 10500, 0.5, 1)[0]![0]);
