@@ -27,6 +27,7 @@ export const losses = [p0, pk] as const;
 export const phases = num('phases', 'phases', '1 or 3.', 3, { default: 3 });
 export const volts = num('v', 'V', 'Voltage, line-to-line for three-phase.', 480);
 export const impedance = num('z', 'fraction', 'Impedance as a percentage of the rating, e.g. 5.75%.', 0.0575);
+export const resistance = num('r', 'fraction', 'Per-unit resistance, e.g. 1.05% (see RPCT).', 0.0105);
 export const sourceMva = num('source_mva', 'MVA', 'Short-circuit power of the supply; blank for an infinite source.', 500, { optional: true });
 
 // Loading.
@@ -84,3 +85,10 @@ export const lossStandard = choice('standard', '"IEEE" (copper Tk 234.5) or "IEC
 });
 /** Conductor and standard, which together fix the temperature constant Tk of a correction to another temperature. */
 export const temperatureConstant = [material, lossStandard] as const;
+
+// A load loss measured at one winding temperature and moved to another (LOSSTEMP, ZCORR).
+export const measuredAt = num('from_c', '°C', 'Winding temperature at which pk_w was measured.', 25);
+export const referenceTemperature = num('to_c', '°C', 'Reference temperature wanted: 85 °C (IEEE, 65 °C rise), 75 °C (IEC), 55 °C (US DOE, liquid-immersed).', 85);
+export const i2rPart = num('i2r_w', 'W', 'The I²R part of pk_w at from_c (measured resistance × current²); needed when to_c is below from_c, blank otherwise treats all of pk_w as I²R.', 9000, {
+  optional: true,
+});

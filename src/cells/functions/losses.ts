@@ -1,6 +1,6 @@
 import { loadLossAt, loadLossAtTemperature, totalLossesAt } from '../../core/losses';
-import { load, losses, pk, temperatureConstant } from '../arguments';
-import { inGroup, num } from '../declaration';
+import { i2rPart, load, losses, measuredAt, pk, referenceTemperature, temperatureConstant } from '../arguments';
+import { inGroup } from '../declaration';
 
 const { each } = inGroup('Losses');
 
@@ -32,11 +32,9 @@ export const LOSSTEMP = each({
   source: 'IEEE C57.12.90 load-loss temperature correction; IEC 60076-1 clause 11.4 (from memory)',
   args: [
     pk,
-    num('from_c', '°C', 'Winding temperature at which pk_w was measured.', 25),
-    num('to_c', '°C', 'Reference temperature wanted: 85 °C (IEEE, 65 °C rise), 75 °C (IEC), 55 °C (US DOE, liquid-immersed).', 85),
-    num('i2r_w', 'W', 'The I²R part of pk_w at from_c (measured resistance × current²); needed when to_c is below from_c, blank otherwise treats all of pk_w as I²R.', 9000, {
-      optional: true,
-    }),
+    measuredAt,
+    referenceTemperature,
+    i2rPart,
     ...temperatureConstant,
   ],
   result: { type: 'number', unit: 'W' },

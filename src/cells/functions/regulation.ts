@@ -1,5 +1,5 @@
 import { baseImpedance, parallelShare, percentReactance, percentResistance, voltageRegulation } from '../../core/voltageRegulation';
-import { kva, pk, volts } from '../arguments';
+import { impedance, kva, pk, resistance, volts } from '../arguments';
 import { bool, inGroup, num, series } from '../declaration';
 
 const { block, each } = inGroup('Regulation and impedance');
@@ -18,8 +18,8 @@ export const XPCT = each({
   help: 'Per-unit reactance from impedance and resistance: √(z² − r²).',
   source: 'impedance triangle, X = √(Z² − R²) (common practice)',
   args: [
-    num('z', 'fraction', 'Impedance, e.g. 5.75%.', 0.0575),
-    num('r', 'fraction', 'Resistance, e.g. 1.05% (see RPCT).', 0.0105),
+    impedance,
+    resistance,
   ],
   result: { type: 'number', unit: 'fraction' },
   compute: percentReactance,
@@ -30,7 +30,7 @@ export const REG = each({
   help: 'Voltage regulation, exact phasor form with the secondary held at rated voltage: |1 + load·(cos φ ∓ j sin φ)(r + jx)| − 1. Negative when a leading load raises the voltage.',
   source: 'phasor diagram of the series-impedance model, secondary at rated voltage (textbook standard)',
   args: [
-    num('r', 'fraction', 'Per-unit resistance, e.g. 1.05% (see RPCT).', 0.0105),
+    resistance,
     num('x', 'fraction', 'Per-unit reactance, e.g. 5.65% (see XPCT).', 0.0565),
     num('load', 'per unit', 'Load as a fraction of rated current; 1 = full load.', 1),
     num('pf', 'power factor', 'Load power factor, 0 to 1.', 0.85),

@@ -1,7 +1,7 @@
 import { impedanceAtTemperature, resistanceAtTemperature } from '../../core/losses';
 import { peakShortCircuitCurrent, SHORT_CIRCUIT_LIMIT_C, shortCircuitTemperature } from '../../core/shortCircuit';
 import { TEST_ITEM_ALIASES, TEST_ITEMS, toleranceLimit, withinTolerance, type TestStandard, type WindingArrangement } from '../../core/testReport';
-import { impedance, kva, material, phases, sourceMva, temperatureConstant, volts, withSample } from '../arguments';
+import { i2rPart, impedance, kva, material, measuredAt, phases, referenceTemperature, sourceMva, temperatureConstant, volts, withSample } from '../arguments';
 import { choice, inGroup, num } from '../declaration';
 
 const { each } = inGroup('Test reports and short circuit');
@@ -83,11 +83,9 @@ export const ZCORR = each({
     num('z', 'fraction', 'Impedance measured at from_c, e.g. 5.62%.', 0.0562),
     kva,
     num('pk_w', 'W', 'Load loss measured at from_c with the impedance.', 9800),
-    num('from_c', '°C', 'Winding temperature during the impedance test.', 25),
-    num('to_c', '°C', 'Reference temperature: 85 °C (IEEE, 65 °C rise) or 75 °C (IEC).', 85),
-    num('i2r_w', 'W', 'The I²R part of pk_w at from_c; blank takes all of pk_w as I²R (allowed only when correcting hotter).', 8600, {
-      optional: true,
-    }),
+    measuredAt,
+    referenceTemperature,
+    withSample(i2rPart, 8600),
     ...temperatureConstant,
   ],
   result: { type: 'number', unit: 'fraction' },
