@@ -4,7 +4,9 @@
  *  - a worksheet whose formula cells got new values: only those `<c>` elements, and the cells of
  *    spilled results, are replaced; every other byte of the part is kept;
  *  - for the first spill in a workbook that has no dynamic-array metadata yet: xl/metadata.xml is
- *    added, with its content type ([Content_Types].xml) and its workbook relationship;
+ *    added, with its content type ([Content_Types].xml) and its workbook relationship; a metadata
+ *    part the workbook already has for other things (rich values, say) gains the dynamic-array
+ *    type and blocks, everything in it kept;
  *  - with `values`, xl/calcChain.xml (the order Excel computes formulas in) is left out, with its
  *    content type and relationship, since no formula is left.
  *
@@ -15,7 +17,7 @@
  * marks a dynamic array ([MS-XLSX] 2.6.x: metadataType XLDAPR, futureMetadata with
  * `xda:dynamicArrayProperties fDynamic="1"`), and every other cell of the range its value.
  */
-import { a1, MAIN_NS, SHEET_METADATA_REL, SHEET_METADATA_TYPE, type FormulaCell, type PackageRead, type SheetRead } from './read';
+import { a1, DYNAMIC_ARRAY_EXT, findDynamicArrayCm, MAIN_NS, SHEET_METADATA_REL, SHEET_METADATA_TYPE, type FormulaCell, type PackageRead, type SheetRead } from './read';
 import type { CellResult, JsonValue } from './xlsx';
 import { writeZip, type OutEntry, type ZipReader } from './zip';
 
@@ -331,8 +333,96 @@ function* patchedText(
   onCells(k);
 }
 
+const DYNAMIC_ARRAY_NS = 'http://schemas.microsoft.com/office/spreadsheetml/2017/dynamicarray';
+const XLDAPR_TYPE = (p: string) =>
+  `<${p}metadataType name="XLDAPR" minSupportedVersion="120000" copy="1" pasteAll="1" pasteValues="1" merge="1" splitFirst="1" rowColShift="1" clearFormats="1" clearComments="1" assign="1" coerce="1" cellMeta="1"/>`;
+const DYNAMIC_BLOCK = (p: string) => `<${p}bk><${p}extLst><${p}ext uri="${DYNAMIC_ARRAY_EXT}"><xda:dynamicArrayProperties fDynamic="1" fCollapsed="0"/></${p}ext></${p}extLst></${p}bk>`;
+
 const METADATA_XML = `<?xml version="1.0" encoding="UTF-8" standalone="yes"?>
-<metadata xmlns="${MAIN_NS}" xmlns:xda="http://schemas.microsoft.com/office/spreadsheetml/2017/dynamicarray"><metadataTypes count="1"><metadataType name="XLDAPR" minSupportedVersion="120000" copy="1" pasteAll="1" pasteValues="1" merge="1" splitFirst="1" rowColShift="1" clearFormats="1" clearComments="1" assign="1" coerce="1" cellMeta="1"/></metadataTypes><futureMetadata name="XLDAPR" count="1"><bk><extLst><ext uri="{bdbb8cdc-fa1e-496e-a857-3c3f30c029c3}"><xda:dynamicArrayProperties fDynamic="1" fCollapsed="0"/></ext></extLst></bk></futureMetadata><cellMetadata count="1"><bk><rc t="1" v="0"/></bk></cellMetadata></metadata>`;
+<metadata xmlns="${MAIN_NS}" xmlns:xda="${DYNAMIC_ARRAY_NS}"><metadataTypes count="1">${XLDAPR_TYPE('')}</metadataTypes><futureMetadata name="XLDAPR" count="1">${DYNAMIC_BLOCK('')}</futureMetadata><cellMetadata count="1"><bk><rc t="1" v="0"/></bk></cellMetadata></metadata>`;
+
+/**
+ * An existing metadata part (CT_Metadata: metadataTypes, metadataStrings, mdxMetadata,
+ * futureMetadata*, cellMetadata, valueMetadata, extLst, in that order) with a dynamic-array block
+ * added: the XLDAPR type if it is missing, a futureMetadata block with fDynamic, and a cellMetadata
+ * block pointing at both. Every element already there stays as it was, so the `cm` and `vm`
+ * indexes other cells hold still mean what they meant. Undefined where the part is not in a form
+ * this can extend (the result is read back to be sure), and the caller writes legacy arrays.
+ */
+export function withDynamicArrayBlock(text: string, part: string): { text: string; cm: number } | undefined {
+  const root = /<(\w+:)?metadata\b([^>]*?)(\/?)>/.exec(text);
+  if (root === null || root[3] === '/') return undefined;
+  const p = root[1] ?? '';
+  const declared = /\sxmlns:xda\s*=\s*["']([^"']*)["']/.exec(root[2]!);
+  if (declared !== null && declared[1] !== DYNAMIC_ARRAY_NS) return undefined;
+  let out = declared !== null ? text : `${text.slice(0, root.index)}<${p}metadata${root[2]} xmlns:xda="${DYNAMIC_ARRAY_NS}">${text.slice(root.index + root[0].length)}`;
+  const tag = (name: string) => `${p}${name}`;
+
+  /** The first `name` element whose start tag passes `test`, with its attributes and content. */
+  const element = (name: string, test: (attrs: string) => boolean = () => true) => {
+    for (const m of out.matchAll(new RegExp(`<${tag(name)}(\\s[^>]*)?>([\\s\\S]*?)</${tag(name)}>`, 'g'))) {
+      if (test(m[1] ?? '')) return { name, at: m.index, whole: m[0], attrs: m[1] ?? '', body: m[2]! };
+    }
+    return undefined;
+  };
+  const count = (body: string, name: string) => body.match(new RegExp(`<${tag(name)}[\\s/>]`, 'g'))?.length ?? 0;
+  /** The element with `xml` appended to its content and its count attribute, if it has one, set to n. */
+  const append = (e: NonNullable<ReturnType<typeof element>>, n: number, xml: string) => {
+    const attrs = e.attrs.replace(/(\scount\s*=\s*)(["'])\d*\2/, `$1"${n}"`);
+    out = `${out.slice(0, e.at)}<${tag(e.name)}${attrs}>${e.body}${xml}</${tag(e.name)}>${out.slice(e.at + e.whole.length)}`;
+  };
+  /**
+   * Inserts `xml` after the last of these elements the part has (their names occur nowhere else,
+   * so their last end is the place), or first in the part when it has none of them.
+   */
+  const insertAfter = (names: string[], xml: string) => {
+    let i = out.indexOf('>', out.search(new RegExp(`<${tag('metadata')}[\\s>]`))) + 1;
+    for (const n of names) for (const m of out.matchAll(new RegExp(`</${tag(n)}>|<${tag(n)}(\\s[^>]*)?/>`, 'g'))) i = Math.max(i, m.index + m[0].length);
+    out = out.slice(0, i) + xml + out.slice(i);
+  };
+  // A self-closing (empty) list would need rewriting rather than extending: left to legacy arrays.
+  for (const name of ['metadataTypes', 'cellMetadata']) if (new RegExp(`<${tag(name)}\\b[^>]*/>`).test(out)) return undefined;
+
+  let t: number;
+  const types = element('metadataTypes');
+  if (types === undefined) {
+    insertAfter([], `<${tag('metadataTypes')} count="1">${XLDAPR_TYPE(p)}</${tag('metadataTypes')}>`);
+    t = 1;
+  } else {
+    const names = [...types.body.matchAll(new RegExp(`<${tag('metadataType')}\\s[^>]*?\\bname\\s*=\\s*["']([^"']*)["']`, 'g'))].map((m) => m[1]);
+    t = names.indexOf('XLDAPR') + 1;
+    if (t === 0) {
+      t = count(types.body, 'metadataType') + 1;
+      append(types, t, XLDAPR_TYPE(p));
+    }
+  }
+
+  let v: number;
+  const future = element('futureMetadata', (attrs) => /\bname\s*=\s*["']XLDAPR["']/.test(attrs));
+  if (future === undefined) {
+    insertAfter(['metadataTypes', 'metadataStrings', 'mdxMetadata', 'futureMetadata'], `<${tag('futureMetadata')} name="XLDAPR" count="1">${DYNAMIC_BLOCK(p)}</${tag('futureMetadata')}>`);
+    v = 0;
+  } else {
+    v = count(future.body, 'bk');
+    append(future, v + 1, DYNAMIC_BLOCK(p));
+  }
+
+  let cm: number;
+  const record = `<${tag('bk')}><${tag('rc')} t="${t}" v="${v}"/></${tag('bk')}>`;
+  const cells = element('cellMetadata');
+  if (cells === undefined) {
+    insertAfter(['metadataTypes', 'metadataStrings', 'mdxMetadata', 'futureMetadata'], `<${tag('cellMetadata')} count="1">${record}</${tag('cellMetadata')}>`);
+    cm = 1;
+  } else {
+    cm = count(cells.body, 'bk') + 1;
+    append(cells, cm, record);
+  }
+  try {
+    return findDynamicArrayCm(out, part) === cm ? { text: out, cm } : undefined;
+  } catch {
+    return undefined; // the edit left the part unreadable: legacy arrays, the part as it was
+  }
+}
 
 function freeName(taken: Set<string>, base: string, ext: string): string {
   if (!taken.has(`${base}${ext}`)) return `${base}${ext}`;
@@ -384,6 +474,14 @@ export async function patchPackage(
     replaced.set('[Content_Types].xml', Buffer.from(types.replace(/<\/(\w+:)?Types>\s*$/, (end) => `<Override PartName="/${path}" ContentType="${SHEET_METADATA_TYPE}"/>${end}`), 'utf8'));
     added.push({ name: path, content: Buffer.from(METADATA_XML, 'utf8') });
     cm = 1;
+  }
+  if (needsMetadata && cm === undefined && read.metadataPath !== undefined) {
+    const text = read.texts.get(read.metadataPath);
+    const grown = text === undefined ? undefined : withDynamicArrayBlock(text, read.metadataPath);
+    if (grown !== undefined) {
+      replaced.set(read.metadataPath, Buffer.from(grown.text, 'utf8'));
+      cm = grown.cm;
+    }
   }
   if (options.values) {
     const chain = read.entries.find((e) => /(^|\/)calcChain\.xml$/i.test(e.name));

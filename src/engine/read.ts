@@ -262,7 +262,7 @@ function readSharedStrings(text: string, part: string): string[] {
   return out;
 }
 
-const DYNAMIC_ARRAY_EXT = '{bdbb8cdc-fa1e-496e-a857-3c3f30c029c3}';
+export const DYNAMIC_ARRAY_EXT = '{bdbb8cdc-fa1e-496e-a857-3c3f30c029c3}';
 
 /**
  * The 1-based cm index of a cell metadata block that marks a dynamic array, if the metadata part

@@ -3,6 +3,8 @@
  * call: read, recalculate, write formulas with their values, read again.
  */
 import { describe, expect, it } from 'vitest';
+import { withDynamicArrayBlock } from '../../src/engine/patch';
+import { findDynamicArrayCm } from '../../src/engine/read';
 import { calculateWorkbook, WorkbookError } from '../../src/engine/xlsx';
 import { xfmr, xfmrRange } from '../support/cells';
 import { fml, handMadeXlsx, num, partText, replacePart, row, str } from './ooxml';
@@ -83,6 +85,49 @@ describe('reading, recalculating and writing .xlsx', () => {
     expect(second.results).toEqual(first.results);
     expect(second.changedParts).toEqual([]);
     for (const part of ['xl/metadata.xml', 'xl/worksheets/sheet1.xml', '[Content_Types].xml']) expect(await partText(second.bytes, part)).toBe(await partText(first.bytes, part));
+  });
+
+  it('adds the dynamic-array block to a metadata part the workbook has for rich values, keeping every byte of what it held', async () => {
+    // A workbook with a picture in a cell keeps its rich-value metadata in xl/metadata.xml
+    // ([MS-XLSX] 2.3.x richdata: metadata type XLRICHVALUE, futureMetadata with xlrd:rvb, and
+    // valueMetadata that cells point to with vm). Written by hand from that structure.
+    const richType = '<metadataType name="XLRICHVALUE" minSupportedVersion="120000" copy="1" pasteAll="1" pasteValues="1" merge="1" splitFirst="1" rowColShift="1" clearFormats="1" clearComments="1" assign="1" coerce="1"/>';
+    const richFuture = '<futureMetadata name="XLRICHVALUE" count="1"><bk><extLst><ext uri="{3e2802c4-a4d2-4d8b-9148-e3be6c30e623}"><xlrd:rvb i="0"/></ext></extLst></bk></futureMetadata>';
+    const richValues = '<valueMetadata count="1"><bk><rc t="1" v="0"/></bk></valueMetadata>';
+    const metadata = `<?xml version="1.0" encoding="UTF-8" standalone="yes"?>\n<metadata xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main" xmlns:xlrd="http://schemas.microsoft.com/office/spreadsheetml/2017/richdata"><metadataTypes count="1">${richType}</metadataTypes>${richFuture}${richValues}</metadata>`;
+    let bytes = await handMadeXlsx([{ name: 'S', rows: row(1, fml('A1', '_xldudf_XFMR_EFFCURVE(1000,1400,10500,1,3)')) }]);
+    bytes = await replacePart(bytes, 'xl/metadata.xml', metadata);
+    bytes = await replacePart(bytes, 'xl/_rels/workbook.xml.rels', (await partText(bytes, 'xl/_rels/workbook.xml.rels')).replace('</Relationships>', '<Relationship Id="rId9" Type="http://schemas.openxmlformats.org/officeDocument/2006/relationships/sheetMetadata" Target="metadata.xml"/></Relationships>'));
+    bytes = await replacePart(bytes, '[Content_Types].xml', (await partText(bytes, '[Content_Types].xml')).replace('</Types>', '<Override PartName="/xl/metadata.xml" ContentType="application/vnd.openxmlformats-officedocument.spreadsheetml.sheetMetadata+xml"/></Types>'));
+
+    const { bytes: out, changedParts } = await recalc(bytes);
+    expect(changedParts.sort()).toEqual(['xl/metadata.xml', 'xl/worksheets/sheet1.xml']);
+    const grown = await partText(out, 'xl/metadata.xml');
+    // The XLDAPR type is the second type, its block the first of its own futureMetadata, and the
+    // cell block the first of a new cellMetadata, placed before valueMetadata as CT_Metadata orders them.
+    expect(grown).toContain(`<metadataTypes count="2">${richType}<metadataType name="XLDAPR"`);
+    expect(grown).toContain(`</metadataTypes>${richFuture}<futureMetadata name="XLDAPR" count="1"><bk><extLst><ext uri="{bdbb8cdc-fa1e-496e-a857-3c3f30c029c3}"><xda:dynamicArrayProperties fDynamic="1" fCollapsed="0"/></ext></extLst></bk></futureMetadata><cellMetadata count="1"><bk><rc t="2" v="0"/></bk></cellMetadata>${richValues}</metadata>`);
+    expect(grown).toContain('xmlns:xda="http://schemas.microsoft.com/office/spreadsheetml/2017/dynamicarray"');
+    expect(await sheetXml(out)).toMatch(/<c r="A1" cm="1"><f t="array" ref="A1:C3">/);
+    // Read again, the file has a dynamic-array block: nothing changes the second time.
+    expect((await recalc(out)).changedParts).toEqual([]);
+  });
+
+  it('adds its block after the ones a metadata part already has, with a prefix if the part uses one', () => {
+    const main = 'http://schemas.openxmlformats.org/spreadsheetml/2006/main';
+    const withOther = `<x:metadata xmlns:x="${main}"><x:metadataTypes count="1"><x:metadataType name="OTHER"/></x:metadataTypes><x:futureMetadata name="OTHER" count="1"><x:bk/></x:futureMetadata><x:cellMetadata count="1"><x:bk><x:rc t="1" v="0"/></x:bk></x:cellMetadata></x:metadata>`;
+    const grown = withDynamicArrayBlock(withOther, 'xl/metadata.xml')!;
+    expect(grown.cm).toBe(2);
+    expect(grown.text).toContain('<x:cellMetadata count="2"><x:bk><x:rc t="1" v="0"/></x:bk><x:bk><x:rc t="2" v="0"/></x:bk></x:cellMetadata>');
+    expect(findDynamicArrayCm(grown.text, 'xl/metadata.xml')).toBe(2);
+    // An XLDAPR future block without a cell block pointing at it: the new block comes after it.
+    const halfway = `<metadata xmlns="${main}"><metadataTypes count="1"><metadataType name="XLDAPR"/></metadataTypes><futureMetadata name="XLDAPR" count="1"><bk/></futureMetadata></metadata>`;
+    const completed = withDynamicArrayBlock(halfway, 'xl/metadata.xml')!;
+    expect(completed.cm).toBe(1);
+    expect(completed.text).toContain('<cellMetadata count="1"><bk><rc t="1" v="1"/></bk></cellMetadata></metadata>');
+    // Forms it does not extend are left to legacy array formulas.
+    expect(withDynamicArrayBlock(`<metadata xmlns="${main}"/>`, 'xl/metadata.xml')).toBeUndefined();
+    expect(withDynamicArrayBlock(`<metadata xmlns="${main}" xmlns:xda="urn:something-else"><metadataTypes count="0"></metadataTypes></metadata>`, 'xl/metadata.xml')).toBeUndefined();
   });
 
   it('clears the cells of an old, larger block when the block shrinks', async () => {
