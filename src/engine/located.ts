@@ -24,6 +24,12 @@ export interface LocatedHandlers {
 /** Entity and character references XML 1.0 allows (§4.1, §4.6): anything else after `&` is not XML. */
 const BAD_REFERENCE = /&(?!(?:lt|gt|amp|quot|apos|#[0-9]+|#x[0-9A-Fa-f]+);)/;
 
+/**
+ * Line ends as an XML processor hands them on (XML 1.0 §2.11): CR LF and a lone CR become LF. A
+ * CR written as a reference (&#13;) is decoded afterwards, so it stays.
+ */
+const lineEnds = (raw: string): string => (raw.indexOf('\r') < 0 ? raw : raw.replace(/\r\n?/g, '\n'));
+
 /** Text with its references decoded; a bare `&` or an unknown entity is an error. */
 export function decodeText(raw: string): string {
   if (raw.indexOf('&') < 0) return raw;
@@ -103,10 +109,10 @@ export function parseLocated(text: string, h: LocatedHandlers, onChars?: (n: num
     depth--;
     h.close(name, false, start, end);
   });
-  parser.on('text', (raw: string) => h.text(decodeText(raw)));
+  parser.on('text', (raw: string) => h.text(decodeText(lineEnds(raw))));
   parser.on('cdata', (raw: string) => {
     skip(']]>');
-    h.text(raw);
+    h.text(lineEnds(raw));
   });
   parser.on('comment', () => skip('-->'));
   parser.on('question', () => skip('?>'));

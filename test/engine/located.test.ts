@@ -37,6 +37,11 @@ describe('worksheet elements with their positions in the text', () => {
     expect(events('<a>&lt;&amp;&#65;&#x42;&quot;</a>')).toContain(`'<&AB"'`);
   });
 
+  it('hands on line ends as XML 1.0 §2.11 has them: CR LF and a lone CR as LF, a CR written as &#13; kept', () => {
+    expect(events('<a>1\r\n2\r3&#13;4</a>')).toContain(`'1\n2\n3\r4'`);
+    expect(events('<a><![CDATA[x\r\ny]]></a>')).toContain(`'x\ny'`);
+  });
+
   it('finds the end of a tag whose attribute value holds ">"', () => {
     const xml = '<a b="x>y" c=\'>\'/>';
     expect(tagEnd(xml, 0)).toBe(xml.length);
