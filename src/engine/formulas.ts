@@ -12,6 +12,9 @@ const MAX_COL = 16_384;
 const CELL_REF = /(?<![\w.$!:])(\$?)([A-Z]{1,3})(\$?)(\d{1,7})(?![\w(!.])/gi;
 // The second half of a range ("A1:B2") is a reference too, and so is a sheet-qualified one.
 const RANGE_END = /(?<=[:!])(\$?)([A-Z]{1,3})(\$?)(\d{1,7})(?![\w(!.])/gi;
+// Whole columns ("A:C", "Sheet1!$B:B") and whole rows ("3:5").
+const COLUMNS = /(?<![\w.$:])(\$?)([A-Z]{1,3}):(\$?)([A-Z]{1,3})(?![\w(!.:])/gi;
+const ROWS = /(?<![\w.$:])(\$?)(\d{1,7}):(\$?)(\d{1,7})(?![\w(!.:])/g;
 
 function colNumber(letters: string): number {
   let n = 0;
@@ -41,7 +44,18 @@ function shiftRef(colAbs: string, col: string, rowAbs: string, row: string, dr: 
 export function shiftFormula(formula: string, dr: number, dc: number): string {
   if (dr === 0 && dc === 0) return formula;
   const move = (_: string, ca: string, c: string, ra: string, r: string) => shiftRef(ca, c, ra, r, dr, dc);
-  return outsideQuotes(formula, (code) => code.replace(CELL_REF, move).replace(RANGE_END, move));
+  const moveColumns = (whole: string, a1: string, c1: string, a2: string, c2: string) => shiftLine(whole, [a1, colNumber(c1)], [a2, colNumber(c2)], dc, MAX_COL, colLetters);
+  const moveRows = (whole: string, a1: string, r1: string, a2: string, r2: string) => shiftLine(whole, [a1, Number(r1)], [a2, Number(r2)], dr, MAX_ROW, String);
+  return outsideQuotes(formula, (code) => code.replace(CELL_REF, move).replace(RANGE_END, move).replace(COLUMNS, moveColumns).replace(ROWS, moveRows));
+}
+
+/** A whole-column or whole-row range moved by `d`, each end unless it is absolute ($). */
+function shiftLine(whole: string, [abs1, n1]: [string, number], [abs2, n2]: [string, number], d: number, max: number, name: (n: number) => string): string {
+  if (n1 < 1 || n1 > max || n2 < 1 || n2 > max) return whole; // not a range of this sheet: a name, say
+  const m1 = abs1 ? n1 : n1 + d;
+  const m2 = abs2 ? n2 : n2 + d;
+  if (m1 < 1 || m1 > max || m2 < 1 || m2 > max) return '#REF!';
+  return `${abs1}${name(m1)}:${abs2}${name(m2)}`;
 }
 
 /** One argument of a simple call: a cell of the formula's own row, or a constant. */
