@@ -3,6 +3,7 @@ const path = require('node:path');
 const HtmlWebpackPlugin = require('html-webpack-plugin');
 const CopyWebpackPlugin = require('copy-webpack-plugin');
 const tsx = require('tsx/cjs/api');
+const webpack = require('webpack');
 
 const DEV_ORIGIN = 'https://localhost:3000';
 
@@ -22,6 +23,19 @@ class FunctionsJsonPlugin {
       );
     });
   }
+}
+
+/**
+ * The adapter's column loop written out once for each `each` function, as a code fragment for
+ * FLUXBOOK_COLUMN_LOOPS: V8 keeps call-site feedback per function in the source, so a loop of its
+ * own lets each function's compute be inlined. The engine compiles such copies at run time; the
+ * add-in's bundle may not, so the build writes them.
+ */
+function columnLoopCopies() {
+  const { numberColumnLoop } = tsx.require('./src/cells/adapter.ts', __filename);
+  const { catalog } = tsx.require('./src/cells/catalog.ts', __filename);
+  const count = catalog.filter((decl) => decl.kind === 'each').length;
+  return `[${Array.from({ length: count }, () => `(${numberColumnLoop.toString()})`).join(',\n')}]`;
 }
 
 async function httpsOptions() {
@@ -51,6 +65,11 @@ module.exports = async (env, argv) => {
     },
     plugins: [
       new FunctionsJsonPlugin(),
+      new webpack.DefinePlugin({
+        FLUXBOOK_COLUMN_LOOPS: webpack.DefinePlugin.runtimeValue(columnLoopCopies, {
+          fileDependencies: [path.resolve(__dirname, 'src/cells/adapter.ts'), path.resolve(__dirname, 'src/cells/catalog.ts')],
+        }),
+      }),
       new HtmlWebpackPlugin({ filename: 'functions.html', template: './src/excel/functions.html', chunks: ['functions'], inject: 'body' }),
       new CopyWebpackPlugin({ patterns: [{ from: 'assets/*.png', to: 'assets/[name][ext]' }] }),
     ],

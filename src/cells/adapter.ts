@@ -29,10 +29,10 @@ export interface AdaptOptions {
    */
   readonly isError?: (value: unknown) => boolean;
   /**
-   * Gives a self-contained function a copy of its own, where the host can compile code at run
-   * time (the engine's `ownCopy`), and returns the function itself where it cannot. Each adapted
-   * function then runs its own copy of the column loop, checked once by `works`. Without it every
-   * function shares one loop — the add-in's case, whose bundle builds no code at run time.
+   * Gives a self-contained function a copy of its own — compiled at run time by the engine
+   * (`ownCopy`), written into the bundle by the add-in's build (`prebuiltCopies`) — or returns the
+   * function itself. Each adapted function then runs its own copy of the column loop, checked once
+   * by `works`. Without it every function shares one loop.
    */
   readonly copyLoop?: <F extends (...args: never[]) => unknown>(f: F, label: string, works: (copy: F) => boolean) => F;
 }
@@ -301,7 +301,7 @@ function caller(compute: EachCompute, n: number): (b: ArgValue[]) => Scalar {
  * the two small result functions, so that each adapted function can run a copy of its own (see
  * `AdaptOptions.copyLoop`) in which compute is inlined.
  */
-function numberColumnLoop(
+export function numberColumnLoop(
   compute: EachCompute,
   buf: ArgValue[],
   columns: readonly unknown[][][],
@@ -353,7 +353,7 @@ function numberColumnLoop(
   return out;
 }
 
-type NumberColumnLoop = typeof numberColumnLoop;
+export type NumberColumnLoop = typeof numberColumnLoop;
 
 /**
  * The copy runs and leaves a text cell to the element step. Only that path is tried: a compute
@@ -366,6 +366,24 @@ function columnLoopWorks(loop: NumberColumnLoop): boolean {
   const others: number[] = [];
   const out = loop(unused, [0], [[['text']]], [0], 1, others, unused, resultCell, refusal);
   return out.length === 1 && others.length === 1 && others[0] === 0;
+}
+
+/**
+ * `copyLoop` for a host whose build wrote copies of `numberColumnLoop` into its code (the add-in,
+ * which compiles nothing at run time): each adapted function takes the next copy. A copy that
+ * fails its check, or one more function than there are copies, gets the shared loop.
+ */
+export function prebuiltCopies(copies: readonly unknown[]): NonNullable<AdaptOptions['copyLoop']> {
+  let next = 0;
+  return (f, _label, works) => {
+    const copy = copies[next++] as typeof f | undefined;
+    try {
+      if (typeof copy === 'function' && works(copy)) return copy;
+    } catch {
+      // falls through to the shared loop
+    }
+    return f;
+  };
 }
 
 /** A ranged argument, read straight from its cells in the element loop (no copy of the range). */

@@ -3,7 +3,7 @@
  * JavaScript-only runtime on Windows (no DOM) and in the browser runtime on Mac and the web, so it
  * touches nothing but the CustomFunctions global.
  */
-import { adapt, type ErrorKind } from '../cells/adapter';
+import { adapt, type ErrorKind, prebuiltCopies } from '../cells/adapter';
 import { catalog } from '../cells/catalog';
 
 function excelError(kind: ErrorKind, message: string): CustomFunctions.Error {
@@ -13,8 +13,16 @@ function excelError(kind: ErrorKind, message: string): CustomFunctions.Error {
   return new CustomFunctions.Error(CustomFunctions.ErrorCode.invalidNumber);
 }
 
+/**
+ * Copies of the adapter's column loop, one for each `each` function, written into the bundle by
+ * the build (webpack.config.js): the add-in compiles no code at run time, and a loop shared by
+ * every function runs them slower (see DEVELOPERS.md, the column loop).
+ */
+declare const FLUXBOOK_COLUMN_LOOPS: readonly unknown[] | undefined;
+const options = { copyLoop: prebuiltCopies(typeof FLUXBOOK_COLUMN_LOOPS === 'undefined' ? [] : FLUXBOOK_COLUMN_LOOPS) };
+
 for (const decl of catalog) {
-  const cellFunction = adapt(decl, excelError);
+  const cellFunction = adapt(decl, excelError, options);
   const arity = decl.args.length;
   CustomFunctions.associate(decl.name, (...args: unknown[]) => {
     try {
