@@ -4,6 +4,7 @@ const HtmlWebpackPlugin = require('html-webpack-plugin');
 const CopyWebpackPlugin = require('copy-webpack-plugin');
 const tsx = require('tsx/cjs/api');
 const webpack = require('webpack');
+const withoutHelpText = require('./scripts/without-help-text.cjs');
 
 const DEV_ORIGIN = 'https://localhost:3000';
 
@@ -61,7 +62,17 @@ module.exports = async (env, argv) => {
     output: { path: path.resolve(__dirname, 'dist'), filename: '[name].js', clean: true },
     resolve: { extensions: ['.ts', '.js'] },
     module: {
-      rules: [{ test: /\.ts$/, exclude: /node_modules/, use: { loader: 'ts-loader', options: { configFile: 'tsconfig.build.json' } } }],
+      rules: [
+        {
+          test: /\.ts$/,
+          exclude: /node_modules/,
+          use: {
+            loader: 'ts-loader',
+            // The help texts go to Excel in functions.json; the bundle has no use for them.
+            options: { configFile: 'tsconfig.build.json', getCustomTransformers: (program) => ({ before: [withoutHelpText(program)] }) },
+          },
+        },
+      ],
     },
     plugins: [
       new FunctionsJsonPlugin(),

@@ -5,6 +5,7 @@
  */
 import vm from 'node:vm';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { catalog } from '../../src/cells/catalog';
 import { answersAsTheAdapter, readDist, STAND_IN, type Call } from './bundle-harness';
 
 let bundle: string;
@@ -39,5 +40,15 @@ describe('dist/functions.js as text', () => {
     const text = readDist('functions.js');
     expect(text).not.toMatch(/\beval\s*\(/);
     expect(text).not.toMatch(/\bnew\s+Function\b/);
+  });
+
+  it('carries no help or source text, which Excel reads from functions.json instead', () => {
+    const text = readDist('functions.js');
+    const json = readDist('functions.json');
+    const long = (s: string) => s.length >= 40;
+    const helps = catalog.flatMap((d) => [d.help, d.source, ...d.args.map((a) => a.help)]).filter(long);
+    expect(helps.length).toBeGreaterThan(100);
+    for (const help of helps) expect(text).not.toContain(help.slice(0, 40));
+    for (const d of catalog.filter((d) => long(d.help))) expect(json).toContain(JSON.stringify(d.help.slice(0, 40)).slice(1, -1));
   });
 });
