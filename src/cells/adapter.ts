@@ -369,21 +369,27 @@ function columnLoopWorks(loop: NumberColumnLoop): boolean {
 }
 
 /**
+ * The copy where it is a function that passes `works`, else the original: a copy a build step
+ * rewrote (a coverage counter, a bundler's helper) can name something it cannot see, and is
+ * checked once before it is used.
+ */
+export function checkedCopy<F extends (...args: never[]) => unknown>(copy: unknown, works: (copy: F) => boolean, original: F): F {
+  try {
+    if (typeof copy === 'function' && works(copy as F)) return copy as F;
+  } catch {
+    // falls through to the original
+  }
+  return original;
+}
+
+/**
  * `copyLoop` for a host whose build wrote copies of `numberColumnLoop` into its code (the add-in,
  * which compiles nothing at run time): each adapted function takes the next copy. A copy that
  * fails its check, or one more function than there are copies, gets the shared loop.
  */
 export function prebuiltCopies(copies: readonly unknown[]): NonNullable<AdaptOptions['copyLoop']> {
   let next = 0;
-  return (f, _label, works) => {
-    const copy = copies[next++] as typeof f | undefined;
-    try {
-      if (typeof copy === 'function' && works(copy)) return copy;
-    } catch {
-      // falls through to the shared loop
-    }
-    return f;
-  };
+  return (f, _label, works) => checkedCopy(copies[next++], works, f);
 }
 
 /** A ranged argument, read straight from its cells in the element loop (no copy of the range). */

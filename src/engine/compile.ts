@@ -4,6 +4,8 @@
  * The add-in does not import this module; its bundle builds no code at run time.
  */
 
+import { checkedCopy } from '../cells/adapter';
+
 let refused = false;
 
 /** `return (function …)` compiled and run, giving the function; a refusing host is not asked twice. */
@@ -39,12 +41,5 @@ export function ownCopy<F extends (...args: never[]) => unknown>(
   } catch {
     return f;
   }
-  // A build step that rewrites function bodies (a coverage counter, a bundler's helper) can leave
-  // the copy naming something it cannot see; such a copy is checked once here and not used.
-  try {
-    if (typeof copy === 'function' && works(copy as F)) return copy as F;
-  } catch {
-    // falls through to the shared function
-  }
-  return f;
+  return checkedCopy(copy, works, f);
 }

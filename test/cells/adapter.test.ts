@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { adapt, CellError, plainErrors } from '../../src/cells/adapter';
+import { adapt, CellError, plainErrors, prebuiltCopies } from '../../src/cells/adapter';
 import { catalog, findFunction } from '../../src/cells/catalog';
 import { each, num, orRange } from '../../src/cells/declaration';
 import { efficiencyAt } from '../../src/core/efficiency';
@@ -184,6 +184,19 @@ describe('an argument that also takes a whole range (orRange)', () => {
 });
 
 describe('the column loop, shared or copied per function', () => {
+  it('hands out copies a build wrote, one a function, and the shared loop once they run out or where one fails its check', () => {
+    const shared = (x: number): number => 2 * x;
+    const first = (x: number): number => 2 * x;
+    const broken = (): number => {
+      throw new ReferenceError('a helper the copy cannot see');
+    };
+    const works = (copy: typeof shared) => copy(1) === 2;
+    const copyLoop = prebuiltCopies([first, broken]);
+    expect(copyLoop(shared, 'A.column', works)).toBe(first);
+    expect(copyLoop(shared, 'B.column', works)).toBe(shared);
+    expect(copyLoop(shared, 'C.column', works)).toBe(shared);
+  });
+
   it('gives a column of numbers mixed with blanks, text, errors and non-finite numbers the results of one call per cell, with its own loop or the shared one', () => {
     const host = Symbol('#DIV/0!');
     const isError = (v: unknown) => v === host;
