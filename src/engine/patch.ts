@@ -338,8 +338,8 @@ const XLDAPR_TYPE = (p: string) =>
   `<${p}metadataType name="XLDAPR" minSupportedVersion="120000" copy="1" pasteAll="1" pasteValues="1" merge="1" splitFirst="1" rowColShift="1" clearFormats="1" clearComments="1" assign="1" coerce="1" cellMeta="1"/>`;
 const DYNAMIC_BLOCK = (p: string) => `<${p}bk><${p}extLst><${p}ext uri="${DYNAMIC_ARRAY_EXT}"><xda:dynamicArrayProperties fDynamic="1" fCollapsed="0"/></${p}ext></${p}extLst></${p}bk>`;
 
-const METADATA_XML = `<?xml version="1.0" encoding="UTF-8" standalone="yes"?>
-<metadata xmlns="${MAIN_NS}" xmlns:xda="${DYNAMIC_ARRAY_NS}"><metadataTypes count="1">${XLDAPR_TYPE('')}</metadataTypes><futureMetadata name="XLDAPR" count="1">${DYNAMIC_BLOCK('')}</futureMetadata><cellMetadata count="1"><bk><rc t="1" v="0"/></bk></cellMetadata></metadata>`;
+/** A metadata part with nothing in it yet: ours, where the workbook has none, gets its block added like any other. */
+const EMPTY_METADATA = `<?xml version="1.0" encoding="UTF-8" standalone="yes"?>\n<metadata xmlns="${MAIN_NS}"></metadata>`;
 
 /**
  * An existing metadata part (CT_Metadata: metadataTypes, metadataStrings, mdxMetadata,
@@ -472,8 +472,9 @@ export async function patchPackage(
     const types = read.texts.get('[Content_Types].xml') ?? '';
     replaced.set(read.workbookRelsPath, Buffer.from(rels.replace(/<\/(\w+:)?Relationships>\s*$/, (end) => `${rel}${end}`), 'utf8'));
     replaced.set('[Content_Types].xml', Buffer.from(types.replace(/<\/(\w+:)?Types>\s*$/, (end) => `<Override PartName="/${path}" ContentType="${SHEET_METADATA_TYPE}"/>${end}`), 'utf8'));
-    added.push({ name: path, content: Buffer.from(METADATA_XML, 'utf8') });
-    cm = 1;
+    const own = withDynamicArrayBlock(EMPTY_METADATA, path)!;
+    added.push({ name: path, content: Buffer.from(own.text, 'utf8') });
+    cm = own.cm;
   }
   if (needsMetadata && cm === undefined && read.metadataPath !== undefined) {
     const text = read.texts.get(read.metadataPath);
