@@ -77,9 +77,8 @@ module.exports = async (env, argv) => {
     plugins: [
       new FunctionsJsonPlugin(),
       new webpack.DefinePlugin({
-        FLUXBOOK_COLUMN_LOOPS: webpack.DefinePlugin.runtimeValue(columnLoopCopies, {
-          fileDependencies: [path.resolve(__dirname, 'src/cells/adapter.ts'), path.resolve(__dirname, 'src/cells/catalog.ts')],
-        }),
+        // Worked out again on every compilation: it depends on the loop and on every declaration.
+        FLUXBOOK_COLUMN_LOOPS: webpack.DefinePlugin.runtimeValue(columnLoopCopies, true),
       }),
       new HtmlWebpackPlugin({ filename: 'functions.html', template: './src/excel/functions.html', chunks: ['functions'], inject: 'body' }),
       new CopyWebpackPlugin({ patterns: [{ from: 'assets/*.png', to: 'assets/[name][ext]' }] }),

@@ -8,8 +8,9 @@
  * A call runs three steps: resolve the shape (each argument read as a matrix and folded into the
  * broadcast shape), coerce the constants (series and single cells, once per call), then evaluate
  * each element (the ranged arguments read straight from their cells, then compute). A column of
- * numbers against constants takes a shorter loop, of which each function has its own copy where
- * the host can compile one (the engine; not the add-in).
+ * numbers against constants takes a shorter loop, of which each function runs its own copy where
+ * the host gives it one (`AdaptOptions.copyLoop`: the engine compiles them, the add-in's build
+ * writes them).
  */
 import { argumentMessage, InputError, NoAnswerError, NotInTableError } from '../core/errors';
 import { notAnOption, optionMatcher } from '../core/guards';
