@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { adapt, CellError, plainErrors, prebuiltCopies } from '../../src/cells/adapter';
 import { catalog, findFunction } from '../../src/cells/catalog';
-import { each, num, orRange } from '../../src/cells/declaration';
+import { bool, each, num, orRange, text } from '../../src/cells/declaration';
 import { efficiencyAt } from '../../src/core/efficiency';
 import { InputError } from '../../src/core/errors';
 import { ownCopy } from '../../src/engine/compile';
@@ -209,6 +209,33 @@ describe('the column loop, shared or copied per function', () => {
       expect(column.map((row) => row[0])).toEqual(oneByOne);
       expect(column[0]![0]).toBeCloseTo(efficiencyAt(500, 1400, 10500, 0.5, 1), 15);
       expect(column[4]![0]).toBe(host);
+    }
+  });
+
+  it('gives every kind of result a column loop meets — a number, text, a non-finite number, a refusal — as one call per cell does, and hands compute its text, logical and blank optional arguments unchanged', () => {
+    const seen: unknown[][] = [];
+    const decl = each({
+      name: 'SCALED',
+      group: 'test',
+      help: 'x times the scale, or a word about it.',
+      source: 'common practice',
+      args: [num('x', 'ratio', 'A value.', 1), text('label', 'A word.', 'w'), bool('wordy', 'Answer in words?', false), num('offset', 'ratio', 'Added.', 0, { optional: true })],
+      result: { type: 'number', unit: 'ratio' },
+      compute: (x, label, wordy, offset) => {
+        seen.push([label, wordy, offset]);
+        if (x < 0) throw new InputError('x', 'must not be negative');
+        if (x === 0) return Infinity;
+        return wordy && x === 2 ? `${label} two` : x * 1.5 + (offset ?? 0);
+      },
+    });
+    const cells = [1, 2, 0, -1, 0.25];
+    for (const options of [{}, { copyLoop: ownCopy }]) {
+      seen.length = 0;
+      const scaled = adapt(decl, plainErrors, options);
+      const column = scaled(cells.map((c) => [c]), 'w', true, null);
+      expect(column.map((row) => row[0])).toEqual(cells.map((c) => scaled(c, 'w', true, null)[0]![0]));
+      expect(column.map((row) => (row[0] instanceof CellError ? row[0].code : row[0]))).toEqual([1.5, 'w two', '#NUM!', '#VALUE!', 0.375]);
+      expect(seen.every(([label, wordy, offset]) => label === 'w' && wordy === true && offset === undefined)).toBe(true);
     }
   });
 });
