@@ -7,36 +7,18 @@
  * Uses Debian's /usr/bin/chromium (never a downloaded browser). Missing in CI it fails; missing
  * on a developer's machine it is skipped with a message (apt-get install chromium).
  */
-import { accessSync, constants, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import { extname, join, normalize, sep } from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { CHROMIUM, CHROMIUM_ARGS, haveChromium as isChromiumInstalled } from '../../scripts/chromium';
 import { answersAsTheAdapter, distDir, readDist, STAND_IN, type Call } from './bundle-harness';
 
-const CHROMIUM = '/usr/bin/chromium';
-const CHROMIUM_ARGS = [
-  '--headless',
-  '--no-sandbox',
-  '--disable-gpu',
-  '--disable-background-networking',
-  '--disable-component-update',
-  '--disable-sync',
-  '--no-first-run',
-];
 const inCI = Boolean(process.env.CI) && process.env.CI !== 'false';
-
-function executable(path: string): boolean {
-  try {
-    accessSync(path, constants.X_OK);
-    return true;
-  } catch {
-    return false;
-  }
-}
-const haveChromium = executable(CHROMIUM);
+const haveChromium = isChromiumInstalled();
 if (!haveChromium && !inCI) {
   console.warn(`bundle-chromium: skipped, ${CHROMIUM} is missing (apt-get install chromium to run it; in CI it fails instead)`);
 }
