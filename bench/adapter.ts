@@ -2,7 +2,8 @@
  * Adapter overhead: XFMR.EFF through the cell adapter over 100,000-element ranges (cells in, a
  * spilled column out, as Excel passes them). The goal is against the floor any spreadsheet-facing
  * code pays — the same core loop reading the cells Excel passes and building the one-cell rows of
- * Excel's spill format; the raw core loop over Float64Array is reported beside it to show what
+ * Excel's spill format, whichever of two ways of making a row (bench/floor.ts) was faster in the
+ * run; the raw core loop over Float64Array is reported beside it to show what
  * the cells themselves cost.
  *
  * Measured as a workbook that uses many of our functions leaves the adapter: every function of
@@ -102,7 +103,7 @@ export async function adapterOverhead(n = 100_000): Promise<BenchRow[]> {
       for (let i = 0; i < n; i++) out[i] = efficiencyAt(kva[i]!, 1400, 10500, load[i]!, 1);
       sink += out[n - 1]!;
     },
-    rawWithCells: () => {
+    filledRows: () => {
       sink += floorLoop(kvaCells, loadCells).length;
     },
     literalRows: () => {
@@ -111,9 +112,11 @@ export async function adapterOverhead(n = 100_000): Promise<BenchRow[]> {
   }, { warmupTime: 1000 });
   if (sink === 42) console.log(''); // keep the results alive
   const ratio = t.adapter! / t.raw!;
-  const floorRatio = t.adapter! / t.rawWithCells!;
-  const addInRatio = t.addIn! / t.rawWithCells!;
-  const sharedRatio = t.shared! / t.rawWithCells!;
+  // The floor is whichever way of making the rows was faster in this run.
+  const floor = Math.min(t.filledRows!, t.literalRows!);
+  const floorRatio = t.adapter! / floor;
+  const addInRatio = t.addIn! / floor;
+  const sharedRatio = t.shared! / floor;
   return [{
     measure: `adapter, engine (a column loop per function, compiled at run time): EFF over ${n.toLocaleString('en')} cells vs raw core loop over Float64Array (no cells in or out)`,
     ours: ms(t.adapter!),
@@ -122,31 +125,31 @@ export async function adapterOverhead(n = 100_000): Promise<BenchRow[]> {
     goal: 'report',
     met: true,
   }, {
-    measure: `adapter, engine: the same, vs raw loop reading cells and returning Excel's spill rows`,
+    measure: `adapter, engine: the same, vs raw loop reading cells and returning Excel's spill rows (the faster of two ways to make a row, below)`,
     ours: ms(t.adapter!),
-    reference: ms(t.rawWithCells!),
+    reference: ms(floor),
     ratio: `${floorRatio.toFixed(2)}×`,
     goal: '≤ 1.5×',
     met: floorRatio <= 1.5,
   }, {
     measure: `adapter, add-in (dist/functions.js as Excel loads it, a column loop per function written by the build): the same, vs the same raw loop`,
     ours: ms(t.addIn!),
-    reference: ms(t.rawWithCells!),
+    reference: ms(floor),
     ratio: `${addInRatio.toFixed(2)}×`,
     goal: '≤ 1.5×',
     met: addInRatio <= 1.5,
   }, {
     measure: `adapter, one column loop shared by every function (a host with no copies): the same, vs the same raw loop`,
     ours: ms(t.shared!),
-    reference: ms(t.rawWithCells!),
+    reference: ms(floor),
     ratio: `${sharedRatio.toFixed(2)}×`,
     goal: 'report',
     met: true,
   }, {
-    measure: 'adapter: the raw loop with each row written as a literal [value], vs the raw loop making each row empty and then filling it',
+    measure: 'adapter: the raw loop with each row written as a literal [value], vs the raw loop making each row empty and then filling it (as the adapter does)',
     ours: ms(t.literalRows!),
-    reference: ms(t.rawWithCells!),
-    ratio: `${(t.literalRows! / t.rawWithCells!).toFixed(2)}×`,
+    reference: ms(t.filledRows!),
+    ratio: `${(t.literalRows! / t.filledRows!).toFixed(2)}×`,
     goal: 'report',
     met: true,
   }, await addInInChromium(warmUpCalls(), n)];

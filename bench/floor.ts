@@ -19,7 +19,7 @@ export function unitColumns(n: number): { kva: Float64Array; load: Float64Array;
 /**
  * The least any spreadsheet-facing code pays: the loop reading the cells Excel passes and
  * returning the one-cell rows its spill format needs, each row made as the adapter makes a
- * number's row (empty, then filled).
+ * number's row (empty, then filled). The bench takes this or literalRowsLoop, whichever is faster.
  */
 export function floorLoop(kvaCells: readonly number[][], loadCells: readonly number[][]): number[][] {
   const n = kvaCells.length;
