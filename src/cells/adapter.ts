@@ -348,7 +348,7 @@ export function numberColumnLoop(
         // Its row is made empty and then filled, not written as a literal: the element is stored
         // as a raw double either way, but V8 (Node 20's) may decide that a literal whose rows all
         // outlive a long loop is to be allocated in the old generation, where such a loop has
-        // taken 1.6 to 1.8 times as long (`npm run bench` reports both ways).
+        // taken 1.5 to 1.8 times as long (`npm run bench:rows` times both ways alone).
         const row = new Array<unknown>(1);
         row[0] = value;
         out[i] = row;
